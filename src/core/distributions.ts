@@ -1,0 +1,49 @@
+/**
+ * Thin wrapper over the @stdlib distribution functions, so the rest of the core names one module for
+ * its t, F, χ² and normal quantiles and tail probabilities. No special functions are written here.
+ *
+ * Reference: stdlib (https://stdlib.io), packages @stdlib/stats-base-dists-*.
+ */
+import tQuantileImpl from '@stdlib/stats-base-dists-t-quantile';
+import tCdfImpl from '@stdlib/stats-base-dists-t-cdf';
+import fQuantileImpl from '@stdlib/stats-base-dists-f-quantile';
+import fCdfImpl from '@stdlib/stats-base-dists-f-cdf';
+import chiSquareQuantileImpl from '@stdlib/stats-base-dists-chisquare-quantile';
+import chiSquareCdfImpl from '@stdlib/stats-base-dists-chisquare-cdf';
+import normalQuantileImpl from '@stdlib/stats-base-dists-normal-quantile';
+
+/** Quantile of Student's t with `dof` degrees of freedom. @example tQuantile(0.975, 10) // => 2.228139 (printed t tables give 2.228) */
+export function tQuantile(probability: number, dof: number): number {
+  return tQuantileImpl(probability, dof);
+}
+
+/** Two-sided tail probability P(|T| ≥ |t|) for Student's t with `dof` degrees of freedom. */
+export function tTwoSidedP(t: number, dof: number): number {
+  return 2 * (1 - tCdfImpl(Math.abs(t), dof));
+}
+
+/** Quantile of the F distribution with (d1, d2) degrees of freedom. */
+export function fQuantile(probability: number, d1: number, d2: number): number {
+  return fQuantileImpl(probability, d1, d2);
+}
+
+/** Upper-tail probability P(F ≥ f) of the F distribution with (d1, d2) degrees of freedom. */
+export function fUpperP(f: number, d1: number, d2: number): number {
+  if (!(f > 0)) return 1;
+  return 1 - fCdfImpl(f, d1, d2);
+}
+
+/** Quantile of χ² with `dof` degrees of freedom. */
+export function chiSquareQuantile(probability: number, dof: number): number {
+  return chiSquareQuantileImpl(probability, dof);
+}
+
+/** Upper-tail probability P(X ≥ x) of χ² with `dof` degrees of freedom. */
+export function chiSquareUpperP(x: number, dof: number): number {
+  return 1 - chiSquareCdfImpl(x, dof);
+}
+
+/** Quantile of the standard normal distribution. */
+export function normalQuantile(probability: number): number {
+  return normalQuantileImpl(probability, 0, 1);
+}

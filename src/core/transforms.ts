@@ -1,0 +1,53 @@
+/**
+ * Variable transforms applied before fitting: u = x, 1/x or ln x; v = y or ln y.
+ * A reciprocal x suits Arrhenius-like data (ln y linear in 1/T); ln y suits quantities spanning decades.
+ */
+import { FitError } from './fitError.ts';
+import type { TransformX, TransformY } from './types.ts';
+
+/** Apply the x transform to one value. */
+export function forwardX(transform: TransformX, x: number): number {
+  if (transform === 'reciprocal') return 1 / x;
+  if (transform === 'log') return Math.log(x);
+  return x;
+}
+
+/** Apply the y transform to one value. */
+export function forwardY(transform: TransformY, y: number): number {
+  return transform === 'log' ? Math.log(y) : y;
+}
+
+/** Undo the y transform. */
+export function inverseY(transform: TransformY, v: number): number {
+  return transform === 'log' ? Math.exp(v) : v;
+}
+
+/**
+ * Transform a whole data set, checking the domain of each transform.
+ * @throws FitError 'log-domain' or 'reciprocal-domain' naming the first offending point
+ */
+export function transformData(
+  x: readonly number[],
+  y: readonly number[],
+  transformX: TransformX,
+  transformY: TransformY,
+): { u: number[]; v: number[] } {
+  const u: number[] = [];
+  const v: number[] = [];
+  for (let i = 0; i < x.length; i++) {
+    const xi = x[i]!;
+    const yi = y[i]!;
+    if (transformX === 'log' && !(xi > 0)) {
+      throw new FitError('log-domain', `x = ${xi} is not positive, so ln x is undefined`, i);
+    }
+    if (transformX === 'reciprocal' && xi === 0) {
+      throw new FitError('reciprocal-domain', 'x = 0 has no reciprocal', i);
+    }
+    if (transformY === 'log' && !(yi > 0)) {
+      throw new FitError('log-domain', `y = ${yi} is not positive, so ln y is undefined`, i);
+    }
+    u.push(forwardX(transformX, xi));
+    v.push(forwardY(transformY, yi));
+  }
+  return { u, v };
+}

@@ -1,0 +1,172 @@
+/**
+ * Plain, JSON-serialisable types shared by the numerical core and its callers.
+ *
+ * Symbols used throughout the core:
+ *   n  number of points used in the fit        m  polynomial order (degree)
+ *   p  number of fitted coefficients           x  independent variable as the user gives it
+ *   u  fitted-space independent variable, after the x transform (u = x, 1/x or ln x)
+ *   t  mapped variable t = (u − center) / halfWidth, on [−1, 1] over the data
+ *   v  fitted-space response, after the y transform (v = y or ln y)
+ *   w  weight of a point, 1/σ² when a standard uncertainty σ is given
+ */
+
+/** Transform applied to x before fitting. */
+export type TransformX = 'identity' | 'reciprocal' | 'log';
+/** Transform applied to y before fitting. */
+export type TransformY = 'identity' | 'log';
+
+/** Data for one fit. Arrays are not modified. */
+export interface FitData {
+  readonly x: readonly number[];
+  readonly y: readonly number[];
+  /** Per-point standard uncertainty of y, in y's units; gives a weighted fit with w = 1/σ². */
+  readonly uncertainty?: readonly number[] | undefined;
+}
+
+/** A point the fitted curve must pass through exactly (in the user's x and y). */
+export interface PointConstraint {
+  readonly x: number;
+  readonly y: number;
+}
+
+export interface FitOptions {
+  /** Polynomial order m ≥ 0. */
+  readonly order: number;
+  /** Fit an intercept a₀ (default true). Without it a₀ is fixed at 0 in the fitted space. */
+  readonly intercept?: boolean;
+  readonly transformX?: TransformX;
+  readonly transformY?: TransformY;
+  /** Equality constraints: the curve passes through these points. */
+  readonly constraints?: readonly PointConstraint[];
+  /** Confidence level for intervals and bands, in (0, 1); default 0.95. */
+  readonly confidence?: number;
+  /**
+   * Exact rational certification of the coefficients and their statistics (default 'auto': used when the fit
+   * has no transform, so that the inputs are the decimals the user wrote). 'off' keeps the floating solution.
+   */
+  readonly exact?: 'auto' | 'off';
+}
+
+/** Affine map from the fitted-space variable u to t = (u − center) / halfWidth. */
+export interface DomainMap {
+  readonly center: number;
+  readonly halfWidth: number;
+}
+
+/** One row of the check-values table: evaluate your copied implementation at x and compare with y. */
+export interface CheckValue {
+  readonly x: number;
+  readonly y: number;
+}
+
+/** Residual statistics of one fit, in the fitted space unless the name says otherwise. */
+export interface FitStatistics {
+  readonly n: number;
+  /** Number of fitted (free) coefficients after constraints. */
+  readonly parameters: number;
+  readonly degreesOfFreedom: number;
+  /** Residual sum of squares S_r (weighted when weights are given). */
+  readonly residualSumOfSquares: number;
+  /** s = √(S_r / dof); NaN when dof = 0. */
+  readonly residualStdDev: number;
+  readonly residualVariance: number;
+  /** Centred R² = 1 − S_r/S_t; uncentred 1 − S_r/Σv² for a fit without intercept. */
+  readonly rSquared: number;
+  readonly rSquaredCentred: boolean;
+  readonly adjustedRSquared: number;
+  /** √(S_r / n). */
+  readonly rmse: number;
+  readonly maxAbsResidual: number;
+  /** max |r_i / v_i| over points with v_i ≠ 0. */
+  readonly maxRelResidual: number;
+  /** Same two, measured in the user's y units (differs from the above only under a y transform). */
+  readonly maxAbsResidualOriginal: number;
+  readonly maxRelResidualOriginal: number;
+  readonly press: number;
+  /** √(PRESS / n). */
+  readonly looRmse: number;
+  readonly aicc: number;
+  readonly bic: number;
+  /** 2-norm condition number of the design matrix in the raw power basis of u, and in the mapped basis of t. */
+  readonly conditionRaw: number;
+  readonly conditionMapped: number;
+  /** Reduced χ² = S_r / dof when per-point uncertainties are given (weighted S_r), else null. */
+  readonly reducedChiSquare: number | null;
+  readonly chiSquareP: number | null;
+}
+
+/** Pure-error lack-of-fit F-test, possible when some x values repeat. */
+export interface LackOfFitTest {
+  readonly pureErrorSumOfSquares: number;
+  readonly pureErrorDof: number;
+  readonly lackOfFitSumOfSquares: number;
+  readonly lackOfFitDof: number;
+  readonly f: number;
+  readonly p: number;
+}
+
+/** Wald–Wolfowitz runs test on the signs of the residuals ordered by x. */
+export interface RunsTest {
+  readonly runs: number;
+  readonly positive: number;
+  readonly negative: number;
+  readonly expectedRuns: number;
+  readonly z: number;
+  /** Two-sided p from the normal approximation. */
+  readonly p: number;
+}
+
+/** Per-point diagnostics, in the order of the input points. */
+export interface PointDiagnostics {
+  readonly x: readonly number[];
+  readonly y: readonly number[];
+  readonly fitted: readonly number[];
+  /** Residuals in the fitted space (v − v̂). */
+  readonly residuals: readonly number[];
+  /** Residuals in the user's y units (y − ŷ). */
+  readonly residualsOriginal: readonly number[];
+  readonly leverage: readonly number[];
+  /** Externally studentized residuals. */
+  readonly studentized: readonly number[];
+  readonly cooksDistance: readonly number[];
+}
+
+/** A fitted polynomial: everything needed to publish, evaluate and review it, as plain data. */
+export interface PolynomialFit {
+  readonly order: number;
+  readonly intercept: boolean;
+  readonly transformX: TransformX;
+  readonly transformY: TransformY;
+  readonly weighted: boolean;
+  readonly constraints: readonly PointConstraint[];
+  /** Validity range in the user's x. */
+  readonly range: { readonly min: number; readonly max: number };
+  /** Ascending power-basis coefficients in u (the transformed x): v = Σ a_k u^k. */
+  readonly coefficients: readonly number[];
+  readonly standardErrors: readonly number[];
+  readonly confidenceIntervals: readonly (readonly [number, number])[];
+  /** Covariance of the power-basis coefficients, (m+1)×(m+1). */
+  readonly covariance: readonly (readonly number[])[];
+  /** Well-conditioned form: v = Σ b_k t^k with t = (u − center)/halfWidth. */
+  readonly mapped: {
+    readonly map: DomainMap;
+    readonly coefficients: readonly number[];
+    readonly covariance: readonly (readonly number[])[];
+  };
+  /** Significant digits to print for each power-basis coefficient (see significantDigits). */
+  readonly significantDigits: readonly number[];
+  readonly checkValues: readonly CheckValue[];
+  readonly confidence: number;
+  readonly statistics: FitStatistics;
+  readonly lackOfFit: LackOfFitTest | null;
+  readonly runsTest: RunsTest | null;
+  readonly points: PointDiagnostics;
+  /** How the numbers were obtained, for the page and for reviewers. */
+  readonly method: {
+    readonly solver: 'householder-qr';
+    /** 'exact-rational' when the reported coefficients and statistics were certified in exact arithmetic. */
+    readonly refinement: 'exact-rational' | 'none';
+    readonly rank: number;
+  };
+  readonly warnings: readonly string[];
+}
