@@ -157,6 +157,8 @@ export interface PolynomialFit {
   readonly significantDigits: readonly number[];
   readonly checkValues: readonly CheckValue[];
   readonly confidence: number;
+  /** Variance of a new observation relative to s² (1 unweighted; 1/w for a point of RMS stated uncertainty). */
+  readonly predictionScale: number;
   readonly statistics: FitStatistics;
   readonly lackOfFit: LackOfFitTest | null;
   readonly runsTest: RunsTest | null;

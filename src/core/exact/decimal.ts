@@ -1,0 +1,52 @@
+/**
+ * Exact decimal reading of floating-point inputs.
+ *
+ * Every input double is taken as the shortest decimal that reads back to it (what `String(value)` prints,
+ * ECMAScript Number::toString). For a value parsed from text with at most 15 significant digits that decimal is
+ * the text itself, so the exact solution is the solution for the data as the user wrote them; for any other
+ * double it differs from the binary value by less than half an ulp.
+ *
+ * A set of values is returned as integers sharing one power-of-ten scale: value_i = ints_i · 10^exponent.
+ */
+
+/** Integers with a common decimal exponent: value_i = ints[i] · 10^exponent. */
+export interface ScaledIntegers {
+  readonly ints: bigint[];
+  readonly exponent: number;
+}
+
+interface DecimalParts {
+  readonly digits: bigint;
+  readonly exponent: number;
+}
+
+const DECIMAL = /^(-?)(\d+)(?:\.(\d+))?(?:e([+-]\d+))?$/;
+
+/** Split a finite double into signed integer digits and a power-of-ten exponent. */
+export function decimalParts(value: number): DecimalParts {
+  if (!Number.isFinite(value)) throw new Error(`decimalParts requires a finite number, got ${value}`);
+  const match = DECIMAL.exec(String(value));
+  if (match === null) throw new Error(`decimalParts cannot read ${String(value)}`);
+  const [, sign, whole, fraction = '', exp = '0'] = match;
+  const digits = BigInt((sign ?? '') + (whole ?? '') + fraction);
+  return { digits, exponent: Number(exp) - fraction.length };
+}
+
+/** Bring values to one decimal exponent (the smallest among them). @example scaleToIntegers([1.5, 20]) // => { ints: [15n, 200n], exponent: -1 } */
+export function scaleToIntegers(values: readonly number[], extraExponents: readonly number[] = []): ScaledIntegers {
+  const parts = values.map(decimalParts);
+  let exponent = Math.min(0, ...extraExponents);
+  for (const part of parts) if (part.digits !== 0n && part.exponent < exponent) exponent = part.exponent;
+  const ints = parts.map((part) => (part.digits === 0n ? 0n : part.digits * 10n ** BigInt(part.exponent - exponent)));
+  return { ints, exponent };
+}
+
+/** Smallest decimal exponent among values (0 if all are integers). */
+export function minExponent(values: readonly number[]): number {
+  let exponent = 0;
+  for (const value of values) {
+    const part = decimalParts(value);
+    if (part.digits !== 0n && part.exponent < exponent) exponent = part.exponent;
+  }
+  return exponent;
+}

@@ -1,0 +1,206 @@
+/**
+ * Polynomial least-squares fit of one order: v = Σ_k a_k u^k, with u and v the (optionally transformed) x and y.
+ *
+ * The solve is a Householder QR of the weighted design matrix in the mapped variable t = (u − c)/h ∈ [−1, 1]
+ * (never the normal equations in floating point), with column equilibration, an SVD rank/condition guard, and
+ * the null-space method for equality constraints (see leastSquares.ts). When the fit has no transform, the
+ * coefficients and their statistics are then certified in exact rational arithmetic from the decimal inputs
+ * (see exact/exactLeastSquares.ts), so every printed digit is right however ill-conditioned the power basis is.
+ *
+ * Weights: a standard uncertainty σ_i of y gives w_i = 1/σ_i²; under ln y it is propagated as σ_i/y_i.
+ * Standard errors are scaled by the residual variance (s²·(XᵀWX)⁻¹), as in the NIST StRD certified values.
+ *
+ * Cost: O(n·m²) floating point, plus the exact certification (big-integer, grows with digits and m).
+ *
+ * @example fitPolynomial({ x: [0, 1, 2, 3], y: [1, 3, 5, 7] }, { order: 1 }).coefficients // => [1, 2]
+ * @throws FitError when the data cannot support the requested fit (too few distinct x, rank deficiency, …)
+ */
+import { Matrix, SingularValueDecomposition } from 'ml-matrix';
+import { domainMap, toUnit } from './domain.ts';
+import { mappedCovarianceToPower, mappedToPower } from './convertBasis.ts';
+import { chiSquareUpperP, tQuantile } from './distributions.ts';
+import { evaluateFit } from './evaluate.ts';
+import { exactLeastSquares } from './exact/exactLeastSquares.ts';
+import { FitError } from './fitError.ts';
+import { significantDigits } from './format/significantDigits.ts';
+import { solveLeastSquares } from './leastSquares.ts';
+import { lackOfFit } from './stats/lackOfFit.ts';
+import { residualStatistics, totalSumOfSquares } from './stats/residualStatistics.ts';
+import { runsTest } from './stats/runsTest.ts';
+import { forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+import { validateFitInput } from './validateFitInput.ts';
+import type { FitData, FitOptions, PolynomialFit } from './types.ts';
+
+function design(values: readonly number[], powers: readonly number[], rowScale?: readonly number[]): Matrix {
+  return new Matrix(values.map((value, i) => powers.map((k) => value ** k * (rowScale ? rowScale[i]! : 1))));
+}
+
+function condition(matrix: Matrix): number {
+  if (matrix.columns === 0) return 1;
+  return new SingularValueDecomposition(matrix, { autoTranspose: true, computeLeftSingularVectors: false, computeRightSingularVectors: false }).condition;
+}
+
+export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit {
+  const { order, intercept, transformX, transformY, constraints, confidence } = validateFitInput(data, options);
+  const n = data.x.length;
+  const { u, v } = transformData(data.x, data.y, transformX, transformY);
+  const weighted = data.uncertainty !== undefined;
+  const sigmaV = data.uncertainty?.map((sigma, i) => (transformY === 'log' ? sigma / data.y[i]! : sigma));
+  const weights = sigmaV ? sigmaV.map((sigma) => 1 / (sigma * sigma)) : new Array<number>(n).fill(1);
+  const rootWeights = weights.map(Math.sqrt);
+
+  const powers: number[] = [];
+  for (let k = intercept ? 0 : 1; k <= order; k++) powers.push(k);
+  const distinct = new Set(intercept ? u : u.filter((value) => value !== 0)).size;
+  if (powers.length - constraints.length > distinct || powers.length > distinct + constraints.length) {
+    throw new FitError(
+      'too-few-distinct',
+      `order ${order} needs at least ${powers.length - constraints.length} distinct x values${intercept ? '' : ' other than 0'}, the data have ${distinct}`,
+    );
+  }
+  const cu = constraints.map((c) => forwardX(transformX, c.x));
+  const cv = constraints.map((c) => forwardY(transformY, c.y));
+  const uMin = Math.min(...u);
+  const uMax = Math.max(...u);
+  cu.forEach((value, i) => {
+    if (value < uMin || value > uMax) {
+      throw new FitError('constraint-outside-range', `the constraint at x = ${constraints[i]!.x} is outside the data range`);
+    }
+  });
+
+  // Without an intercept the model must keep u = 0 at t = 0, so the map only scales.
+  const map = intercept ? domainMap(u) : { center: 0, halfWidth: Math.max(Math.abs(uMin), Math.abs(uMax)) };
+  const t = u.map((value) => toUnit(map, value));
+  const A = design(t, powers, rootWeights);
+  const constraintMatrix = design(cu.map((value) => toUnit(map, value)), powers);
+  const solution = solveLeastSquares(
+    A,
+    v.map((value, i) => value * rootWeights[i]!),
+    constraints.length ? { C: constraintMatrix, d: cv } : undefined,
+  );
+  const parameters = solution.freeParameters;
+  const fittedV = solution.fitted.map((value, i) => value / rootWeights[i]!);
+  const residuals = v.map((value, i) => value - fittedV[i]!);
+  const weightedResiduals = residuals.map((r, i) => r * rootWeights[i]!);
+  const centred = intercept;
+  const total = totalSumOfSquares(v, weights, centred);
+  const summary = residualStatistics(weightedResiduals, solution.leverage, parameters, total, centred);
+  const dof = n - parameters;
+
+  // Full-length mapped coefficients and covariance (zero entries for a fixed a₀).
+  const size = order + 1;
+  const mappedCoefficients = new Array<number>(size).fill(0);
+  const mappedCovariance = Array.from({ length: size }, () => new Array<number>(size).fill(0));
+  powers.forEach((k, j) => {
+    mappedCoefficients[k] = solution.beta[j]!;
+    powers.forEach((l, i) => {
+      mappedCovariance[k]![l] = summary.residualVariance * solution.unscaledCovariance[j]![i]!;
+    });
+  });
+  let coefficients = mappedToPower(mappedCoefficients, map);
+  if (!intercept) coefficients[0] = 0;
+  let covariance = mappedCovarianceToPower(mappedCovariance, map);
+  let residualStats = {
+    residualSumOfSquares: summary.residualSumOfSquares,
+    residualVariance: summary.residualVariance,
+    residualStdDev: summary.residualStdDev,
+    rSquared: summary.rSquared,
+  };
+  let refinement: 'exact-rational' | 'none' = 'none';
+  if (options.exact !== 'off' && transformX === 'identity' && transformY === 'identity') {
+    const exact = exactLeastSquares({ u, v, weights: weighted ? weights : undefined, order, intercept, constraints: cu.map((value, i) => ({ u: value, v: cv[i]! })) });
+    if (exact) {
+      coefficients = exact.coefficients;
+      covariance = exact.covariance;
+      residualStats = {
+        residualSumOfSquares: exact.residualSumOfSquares,
+        residualVariance: exact.residualVariance,
+        residualStdDev: exact.residualStdDev,
+        rSquared: exact.rSquared,
+      };
+      refinement = 'exact-rational';
+    }
+  }
+  const standardErrors = covariance.map((row, k) => Math.sqrt(Math.max(0, row[k]!)));
+  const quantile = dof > 0 ? tQuantile((1 + confidence) / 2, dof) : NaN;
+  const confidenceIntervals = coefficients.map((a, k) => [a - quantile * standardErrors[k]!, a + quantile * standardErrors[k]!] as const);
+
+  const fittedY = fittedV.map((value) => inverseY(transformY, value));
+  const residualsOriginal = data.y.map((y, i) => y - fittedY[i]!);
+  const maxAbs = (values: readonly number[]) => values.reduce((m, value) => Math.max(m, Math.abs(value)), 0);
+  const maxRel = (values: readonly number[], reference: readonly number[]) =>
+    values.reduce((m, value, i) => (reference[i] !== 0 ? Math.max(m, Math.abs(value / reference[i]!)) : m), 0);
+  const xOrder = data.x.map((_, i) => i).sort((a, b) => data.x[a]! - data.x[b]!);
+  const scaleV = maxAbs(v);
+  const unweightedSd = dof > 0 ? Math.sqrt(residuals.reduce((sum, r) => sum + r * r, 0) / dof) : 0;
+  const digitTolerance = Math.max(0.01 * unweightedSd, 1e-13 * scaleV) || 1e-300;
+
+  const range = { min: Math.min(...data.x), max: Math.max(...data.x) };
+  const partial = { transformX, transformY, mapped: { map, coefficients: mappedCoefficients, covariance: mappedCovariance }, range, order };
+  const checkValues = Array.from({ length: 7 }, (_, i) => {
+    const x = i === 6 ? range.max : range.min + ((range.max - range.min) * i) / 6;
+    return { x, y: evaluateFit(partial, x).y };
+  });
+  const meanSquareSigma = sigmaV ? sigmaV.reduce((sum, s) => sum + s * s, 0) / n : 1;
+
+  const warnings: string[] = [];
+  if (dof < 2) warnings.push(`only ${dof} residual degree${dof === 1 ? '' : 's'} of freedom: the fit nearly interpolates the data`);
+  if (solution.condition > 1e10) warnings.push(`the mapped design matrix is ill-conditioned (condition number ${solution.condition.toPrecision(3)})`);
+  if (refinement === 'none' && transformX === 'identity' && transformY === 'identity' && options.exact !== 'off') {
+    warnings.push('exact certification failed; the floating-point solution is reported');
+  }
+
+  return {
+    order,
+    intercept,
+    transformX,
+    transformY,
+    weighted,
+    constraints: constraints.map((c) => ({ x: c.x, y: c.y })),
+    range,
+    coefficients,
+    standardErrors,
+    confidenceIntervals,
+    covariance,
+    mapped: partial.mapped,
+    significantDigits: significantDigits(coefficients, Math.min(...u), Math.max(...u), digitTolerance),
+    checkValues,
+    confidence,
+    predictionScale: meanSquareSigma,
+    statistics: {
+      n,
+      parameters,
+      degreesOfFreedom: dof,
+      ...residualStats,
+      rSquaredCentred: centred,
+      adjustedRSquared: dof > 0 ? 1 - residualStats.residualVariance / (total / (centred ? n - 1 : n)) : NaN,
+      rmse: Math.sqrt(residualStats.residualSumOfSquares / n),
+      maxAbsResidual: maxAbs(residuals),
+      maxRelResidual: maxRel(residuals, v),
+      maxAbsResidualOriginal: maxAbs(residualsOriginal),
+      maxRelResidualOriginal: maxRel(residualsOriginal, data.y),
+      press: summary.press,
+      looRmse: summary.looRmse,
+      aicc: summary.aicc,
+      bic: summary.bic,
+      conditionRaw: condition(design(u, powers, rootWeights)),
+      conditionMapped: condition(A),
+      reducedChiSquare: weighted && dof > 0 ? summary.residualSumOfSquares / dof : null,
+      chiSquareP: weighted && dof > 0 ? chiSquareUpperP(summary.residualSumOfSquares, dof) : null,
+    },
+    lackOfFit: lackOfFit(u, v, weights, summary.residualSumOfSquares, parameters),
+    runsTest: runsTest(xOrder, residuals, 1e-14 * (scaleV || 1)),
+    points: {
+      x: data.x.slice(),
+      y: data.y.slice(),
+      fitted: fittedY,
+      residuals,
+      residualsOriginal,
+      leverage: solution.leverage,
+      studentized: summary.studentized,
+      cooksDistance: summary.cooksDistance,
+    },
+    method: { solver: 'householder-qr', refinement, rank: parameters },
+    warnings,
+  };
+}

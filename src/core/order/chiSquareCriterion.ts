@@ -1,0 +1,70 @@
+/**
+ * χ² consistency test, for data with stated standard uncertainties σ_i: choose the lowest order whose
+ * weighted residual sum of squares is consistent with those uncertainties,
+ *
+ *   χ²(m) = Σ_i (r_i / σ_i)² ≤ χ²_{0.95}(n − p).
+ *
+ * If no order passes (the stated uncertainties are too small for any candidate), the order with the smallest
+ * reduced χ² = χ²/(n − p) is taken and selectOrder adds a warning. By design it returns the lowest order
+ * *consistent* with σ, so on smooth non-polynomial data it stops short of the most accurate order.
+ *
+ * Reference: Bevington & Robinson, *Data Reduction and Error Analysis for the Physical Sciences*, 3rd ed.,
+ * ch. 11 (χ² test of a fit); JCGM 100:2008 (GUM) for standard uncertainty
+ * (https://www.bipm.org/en/committees/jc/jcgm/publications); https://en.wikipedia.org/wiki/Goodness_of_fit
+ *
+ * @example
+ * chiSquareCriterion.choose(table) // => lowest m with χ²(m) ≤ χ²_0.95(n − p)
+ */
+import { chiSquareQuantile, chiSquareUpperP } from '../distributions.ts';
+import { argminOrder } from './argminOrder.ts';
+import { fitOfOrder, formatNumber, formatP, type CandidateTable, type OrderCriterion } from './criterion.ts';
+
+/** Confidence level of the χ² acceptance bound. */
+export const CHI_SQUARE_LEVEL = 0.95;
+
+const quantileCache = new Map<number, number>();
+
+/** χ²_{0.95}(dof), cached. */
+export function chiSquareBound(dof: number): number {
+  let value = quantileCache.get(dof);
+  if (value === undefined) {
+    value = chiSquareQuantile(CHI_SQUARE_LEVEL, dof);
+    quantileCache.set(dof, value);
+  }
+  return value;
+}
+
+/** The lowest candidate order passing the χ² test, or null when none does. */
+export function lowestConsistentOrder(table: CandidateTable): number | null {
+  for (let order = table.minCandidate; order <= table.maxCandidate; order++) {
+    const fit = fitOfOrder(table, order);
+    if (fit.degreesOfFreedom > 0 && fit.residualSumOfSquares <= chiSquareBound(fit.degreesOfFreedom)) return order;
+  }
+  return null;
+}
+
+export const chiSquareCriterion: OrderCriterion = {
+  name: 'chiSquare',
+  label: 'χ² consistency (95 %)',
+  rule: 'Choose the lowest order whose weighted residual sum of squares is within the 95 % point of χ²(n − p), given the stated uncertainties.',
+  requiresUncertainty: true,
+  choose(table: CandidateTable): number {
+    const consistent = lowestConsistentOrder(table);
+    if (consistent !== null) return consistent;
+    return argminOrder(table, (order) => {
+      const fit = fitOfOrder(table, order);
+      return fit.degreesOfFreedom > 0 ? fit.residualSumOfSquares / fit.degreesOfFreedom : Number.NaN;
+    });
+  },
+  explain(table: CandidateTable, order: number): string {
+    const fit = fitOfOrder(table, order);
+    const chiSquare = fit.residualSumOfSquares;
+    const bound = chiSquareBound(fit.degreesOfFreedom);
+    const p = chiSquareUpperP(chiSquare, fit.degreesOfFreedom);
+    if (chiSquare <= bound) {
+      const lowerNote = order > table.minCandidate ? `, and order ${order - 1} is not (χ² = ${formatNumber(fitOfOrder(table, order - 1).residualSumOfSquares)})` : '';
+      return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${formatNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${formatNumber(bound)} (p = ${formatP(p)})${lowerNote}.`;
+    }
+    return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${formatNumber(chiSquare / fit.degreesOfFreedom)} (p = ${formatP(p)}).`;
+  },
+};

@@ -1,0 +1,176 @@
+/**
+ * Automatic polynomial order selection: fit every candidate order from one QR, apply a criterion, and return
+ * the chosen order with a one-sentence reason and the full order table, as plain JSON-serialisable data.
+ *
+ * Steps: transform the data (u = x, 1/x or ln x; v = y or ln y); weight by w = 1/σ_v² when uncertainties are
+ * given (σ_v = σ_y/|y| under ln y, first-order propagation); fit orders 0…M by nested QR (fitNestedOrders);
+ * candidates are 1…M with M = min(maxOrder, n − 2, distinct x − 1); order 0 is chosen only for flat data
+ * (isFlat); otherwise the criterion (default: lowestJustified) chooses. A fixed order skips the criterion but
+ * must come with the author's reason, and the table is reported anyway.
+ *
+ * Reference for the criteria: see each criterion file; overview in src/pages/how-orders-are-chosen.astro.
+ * Cost: O(n M²) plus O(M²) F tests.
+ *
+ * @example
+ * selectOrder({ x: [250, 300, …], y: [...] })
+ * // => { criterion: 'lowestJustified', order: 3, reason: 'Order 3: no higher order up to 6 improves …', orders: [...], … }
+ */
+import { FitError } from '../fitError.ts';
+import { transformData } from '../transforms.ts';
+import type { DomainMap, FitData, TransformX, TransformY } from '../types.ts';
+import { candidateTable } from './candidateTable.ts';
+import { fitOfOrder, formatNumber, type CriterionName } from './criterion.ts';
+import { isFlat } from './isFlat.ts';
+import { DEFAULT_MAX_ORDER, maxCandidateOrder } from './maxCandidateOrder.ts';
+import { fitNestedOrders } from './nestedFits.ts';
+import { DEFAULT_CRITERION, orderCriteria } from './orderCriteria.ts';
+import { orderRows, type OrderRow } from './orderRow.ts';
+
+export interface SelectOrderOptions {
+  /** Criterion to apply (default 'lowestJustified'). 'chiSquare' needs data.uncertainty. */
+  readonly criterion?: CriterionName;
+  /** Cap on candidate orders (default 10). */
+  readonly maxOrder?: number;
+  /** Fit an intercept (default true). */
+  readonly intercept?: boolean;
+  readonly transformX?: TransformX;
+  readonly transformY?: TransformY;
+  /** Use this order instead of a criterion; requires `reason`. */
+  readonly fixedOrder?: number;
+  /** The author's reason for a fixed order, published with it. */
+  readonly reason?: string;
+}
+
+export interface OrderSelection {
+  readonly criterion: CriterionName | 'fixed';
+  readonly order: number;
+  /** One plain sentence with the numbers behind the choice. */
+  readonly reason: string;
+  /** The criterion's rule in one sentence. */
+  readonly rule: string;
+  readonly n: number;
+  readonly intercept: boolean;
+  readonly transformX: TransformX;
+  readonly transformY: TransformY;
+  readonly weighted: boolean;
+  /** The map t = (u − center)/halfWidth used for the table's coefficients. */
+  readonly map: DomainMap;
+  /** Highest order an automatic criterion could choose. */
+  readonly maxCandidate: number;
+  readonly orders: readonly OrderRow[];
+  readonly warnings: readonly string[];
+}
+
+function weightsFor(data: FitData, transformY: TransformY): number[] | undefined {
+  if (!data.uncertainty) return undefined;
+  if (data.uncertainty.length !== data.y.length) {
+    throw new FitError('length-mismatch', 'selectOrder requires one uncertainty per point');
+  }
+  return data.uncertainty.map((sigma, i) => {
+    const sigmaFitted = transformY === 'log' ? sigma / Math.abs(data.y[i]!) : sigma;
+    if (!(sigmaFitted > 0 && Number.isFinite(sigmaFitted))) {
+      throw new FitError('invalid-uncertainty', `uncertainty ${sigma} is not a positive finite number`, i);
+    }
+    return 1 / (sigmaFitted * sigmaFitted);
+  });
+}
+
+/**
+ * Select the polynomial order for one data set.
+ * @throws FitError 'fixed-order-needs-reason', 'chi-square-needs-uncertainty', 'too-few-points',
+ *   'order-too-high', 'length-mismatch', 'invalid-uncertainty', 'not-finite', or a transform-domain error
+ */
+export function selectOrder(data: FitData, options: SelectOrderOptions = {}): OrderSelection {
+  const intercept = options.intercept ?? true;
+  const transformX = options.transformX ?? 'identity';
+  const transformY = options.transformY ?? 'identity';
+  const criterionName = options.criterion ?? DEFAULT_CRITERION;
+  const criterion = orderCriteria[criterionName];
+  if (!criterion) throw new FitError('unknown-criterion', `selectOrder does not know criterion ${String(criterionName)}`);
+  if (options.fixedOrder !== undefined && !(options.reason && options.reason.trim().length > 0)) {
+    throw new FitError('fixed-order-needs-reason', 'selectOrder requires a reason for a fixed order');
+  }
+  if (data.x.length !== data.y.length) throw new FitError('length-mismatch', 'selectOrder requires x and y of equal length');
+  data.x.forEach((value, i) => {
+    if (!Number.isFinite(value) || !Number.isFinite(data.y[i])) throw new FitError('not-finite', 'selectOrder requires finite x and y', i);
+  });
+  const { u, v } = transformData(data.x, data.y, transformX, transformY);
+  const weights = weightsFor(data, transformY);
+  const uncertaintyGiven = weights !== undefined;
+  if (criterion.requiresUncertainty && !uncertaintyGiven) {
+    throw new FitError('chi-square-needs-uncertainty', 'selectOrder requires per-point uncertainties for the chiSquare criterion');
+  }
+
+  const n = u.length;
+  const distinct = new Set(u).size;
+  const maxCandidate = maxCandidateOrder(n, distinct, options.maxOrder ?? DEFAULT_MAX_ORDER);
+  const lowestOrder = intercept ? 0 : 1;
+  if (maxCandidate < 1) {
+    throw new FitError('too-few-points', `selectOrder requires at least three points with two distinct x values, got ${n} points and ${distinct} distinct x`);
+  }
+  let fitMax = maxCandidate;
+  if (options.fixedOrder !== undefined) {
+    const fixed = options.fixedOrder;
+    const highestIdentifiable = Math.min(n - 1, distinct - 1);
+    if (!Number.isInteger(fixed) || fixed < lowestOrder || fixed > highestIdentifiable) {
+      throw new FitError('order-too-high', `selectOrder requires a fixed order between ${lowestOrder} and ${highestIdentifiable}, got ${fixed}`);
+    }
+    fitMax = Math.max(fitMax, fixed);
+  }
+
+  const nested = fitNestedOrders(u, v, { maxOrder: fitMax, intercept, weights });
+  const table = candidateTable(nested, { maxCandidate, uncertaintyGiven });
+  const warnings: string[] = [];
+
+  let chosenOrder: number;
+  let reason: string;
+  const flat = isFlat(table);
+  if (flat) {
+    chosenOrder = 0;
+    reason = `Order 0: the data are flat, no order from 1 to ${maxCandidate} improves significantly on the mean (extra-sum-of-squares F tests at 0.05 split over the orders compared).`;
+  } else {
+    chosenOrder = criterion.choose(table);
+    reason = criterion.explain(table, chosenOrder);
+  }
+  const automaticOrder = chosenOrder;
+
+  if (options.fixedOrder !== undefined) {
+    chosenOrder = options.fixedOrder;
+    reason = `Order ${chosenOrder} fixed by the author: ${options.reason!.trim()}`;
+    if (automaticOrder !== chosenOrder) {
+      warnings.push(`The ${criterion.name} criterion would choose order ${automaticOrder}.`);
+    }
+  }
+
+  const chosenFit = fitOfOrder(table, chosenOrder);
+  if (chosenFit.degreesOfFreedom < 2) {
+    warnings.push(`Order ${chosenOrder} leaves ${chosenFit.degreesOfFreedom} residual degree${chosenFit.degreesOfFreedom === 1 ? '' : 's'} of freedom; the fit is close to interpolation.`);
+  }
+  if (options.fixedOrder === undefined && !flat && chosenOrder === maxCandidate && maxCandidate < n - 3) {
+    warnings.push(`Order ${chosenOrder} is the highest candidate; the data may need a higher order or a transform.`);
+  }
+  if (criterionName === 'chiSquare' && options.fixedOrder === undefined && !flat) {
+    const dof = chosenFit.degreesOfFreedom;
+    const reduced = chosenFit.residualSumOfSquares / dof;
+    if (reason.startsWith('No order')) {
+      warnings.push(`No candidate order is consistent with the stated uncertainties (smallest reduced χ² = ${formatNumber(reduced)}).`);
+    }
+  }
+
+  const rows = orderRows(nested, (order) => order >= 1 && order <= maxCandidate);
+  return {
+    criterion: options.fixedOrder !== undefined ? 'fixed' : criterionName,
+    order: chosenOrder,
+    reason,
+    rule: options.fixedOrder !== undefined ? 'Order fixed by the author, with the reason given.' : criterion.rule,
+    n,
+    intercept,
+    transformX,
+    transformY,
+    weighted: uncertaintyGiven,
+    map: nested.map,
+    maxCandidate,
+    orders: rows,
+    warnings,
+  };
+}

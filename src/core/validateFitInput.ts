@@ -1,0 +1,53 @@
+/**
+ * Boundary checks for fitPolynomial: array lengths, finite numbers, positive uncertainties, a sensible order and
+ * confidence level. Messages follow one grammar ("fitPolynomial requires …") and name the offending point.
+ */
+import { FitError } from './fitError.ts';
+import type { FitData, FitOptions, PointConstraint, TransformX, TransformY } from './types.ts';
+
+export interface ValidatedOptions {
+  readonly order: number;
+  readonly intercept: boolean;
+  readonly transformX: TransformX;
+  readonly transformY: TransformY;
+  readonly constraints: readonly PointConstraint[];
+  readonly confidence: number;
+}
+
+export function validateFitInput(data: FitData, options: FitOptions): ValidatedOptions {
+  const n = data.x.length;
+  if (data.y.length !== n) throw new FitError('length-mismatch', `fitPolynomial requires as many y values (${data.y.length}) as x values (${n})`);
+  if (data.uncertainty && data.uncertainty.length !== n) {
+    throw new FitError('length-mismatch', `fitPolynomial requires one uncertainty per point (${data.uncertainty.length} for ${n} points)`);
+  }
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(data.x[i])) throw new FitError('not-finite', `x = ${data.x[i]} is not a finite number`, i);
+    if (!Number.isFinite(data.y[i])) throw new FitError('not-finite', `y = ${data.y[i]} is not a finite number`, i);
+    const sigma = data.uncertainty?.[i];
+    if (sigma !== undefined && !(sigma > 0 && Number.isFinite(sigma))) {
+      throw new FitError('bad-uncertainty', `uncertainty ${sigma} is not a positive finite number`, i);
+    }
+  }
+  const order = options.order;
+  if (!Number.isInteger(order) || order < 0) throw new FitError('bad-order', `fitPolynomial requires a whole order ≥ 0, got ${order}`);
+  const intercept = options.intercept ?? true;
+  if (!intercept && order === 0) throw new FitError('bad-order', 'fitPolynomial requires order ≥ 1 for a fit without intercept');
+  const confidence = options.confidence ?? 0.95;
+  if (!(confidence > 0 && confidence < 1)) throw new FitError('bad-confidence', `confidence must be in (0, 1), got ${confidence}`);
+  const constraints = options.constraints ?? [];
+  for (const c of constraints) {
+    if (!Number.isFinite(c.x) || !Number.isFinite(c.y)) throw new FitError('not-finite', `constraint (${c.x}, ${c.y}) is not finite`);
+  }
+  const distinctX = new Set(data.x).size;
+  if (distinctX < 2) throw new FitError('constant-x', 'all x values are equal, so no curve in x can be fitted');
+  const needed = order + (intercept ? 1 : 0) - constraints.length;
+  if (n < Math.max(1, needed)) throw new FitError('too-few-points', `order ${order} needs at least ${needed} points, the data have ${n}`);
+  return {
+    order,
+    intercept,
+    transformX: options.transformX ?? 'identity',
+    transformY: options.transformY ?? 'identity',
+    constraints,
+    confidence,
+  };
+}
