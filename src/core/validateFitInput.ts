@@ -14,7 +14,11 @@ export interface ValidatedOptions {
   readonly confidence: number;
 }
 
-export function validateFitInput(data: FitData, options: FitOptions): ValidatedOptions {
+/**
+ * Checks that do not depend on the order: equal lengths, finite values, positive uncertainties, x not constant.
+ * @throws FitError naming the first offending point
+ */
+export function validateFitData(data: FitData): void {
   const n = data.x.length;
   if (data.y.length !== n) throw new FitError('length-mismatch', `fitPolynomial requires as many y values (${data.y.length}) as x values (${n})`);
   if (data.uncertainty && data.uncertainty.length !== n) {
@@ -28,6 +32,12 @@ export function validateFitInput(data: FitData, options: FitOptions): ValidatedO
       throw new FitError('bad-uncertainty', `uncertainty ${sigma} is not a positive finite number`, i);
     }
   }
+  if (new Set(data.x).size < 2) throw new FitError('constant-x', 'all x values are equal, so no curve in x can be fitted');
+}
+
+export function validateFitInput(data: FitData, options: FitOptions): ValidatedOptions {
+  validateFitData(data);
+  const n = data.x.length;
   const order = options.order;
   if (!Number.isInteger(order) || order < 0) throw new FitError('bad-order', `fitPolynomial requires a whole order ≥ 0, got ${order}`);
   const intercept = options.intercept ?? true;
@@ -38,8 +48,6 @@ export function validateFitInput(data: FitData, options: FitOptions): ValidatedO
   for (const c of constraints) {
     if (!Number.isFinite(c.x) || !Number.isFinite(c.y)) throw new FitError('not-finite', `constraint (${c.x}, ${c.y}) is not finite`);
   }
-  const distinctX = new Set(data.x).size;
-  if (distinctX < 2) throw new FitError('constant-x', 'all x values are equal, so no curve in x can be fitted');
   const needed = order + (intercept ? 1 : 0) - constraints.length;
   if (n < Math.max(1, needed)) throw new FitError('too-few-points', `order ${order} needs at least ${needed} points, the data have ${n}`);
   return {

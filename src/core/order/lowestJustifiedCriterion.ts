@@ -34,32 +34,36 @@ export interface LowestJustifiedParameters {
   readonly alpha: number;
   /** Split α over the comparisons (Bonferroni) or use α for each comparison. */
   readonly multiplicity: 'bonferroni' | 'none';
-  /** Accept m only if LOO RMSE(m) ≤ (1 + τ)·min LOO RMSE; null switches the guard off. */
+  /** A higher order k also counts as an improvement when LOO RMSE(k)·(1 + τ) < LOO RMSE(m); null: off. */
   readonly looTolerance: number | null;
+  /** When set, such a LOO improvement counts only if k is also significant at this unadjusted level. */
+  readonly looConfirmAlpha: number | null;
   /** Fewest residual degrees of freedom n − p an accepted order (and every comparison order) must keep. */
   readonly minResidualDof: number;
 }
 
-/** The measured default: α = 0.05 Bonferroni-split, τ = 0.10, at least 2 residual dof. */
+/** The measured default (see the file header and the benchmark). */
 export const LOWEST_JUSTIFIED_DEFAULTS: LowestJustifiedParameters = {
-  alpha: 0.05,
+  alpha: 0.1,
   multiplicity: 'bonferroni',
   looTolerance: 0.1,
+  looConfirmAlpha: 0.05,
   minResidualDof: 2,
 };
 
-/** How one order fares under the rule; used by choose and explain. */
-interface OrderVerdict {
-  readonly order: number;
-  readonly comparisons: number;
-  readonly level: number;
-  /** Smallest raw p over the higher orders compared, the order it was against and its F. */
-  readonly smallestP: number;
+/** Why a higher order k beats order m, or null when none does. */
+export interface Improvement {
   readonly against: number;
   readonly statistic: number;
-  readonly significant: boolean;
+  /** Unadjusted p-value of the F test of m against k. */
+  readonly p: number;
+  /** The Bonferroni level m was tested at. */
+  readonly level: number;
+  readonly comparisons: number;
+  /** 'significant': F significant at the (adjusted) level; 'prediction': LOO RMSE clearly lower and F confirmed. */
+  readonly kind: 'significant' | 'prediction';
+  /** LOO RMSE(m) / LOO RMSE(k). */
   readonly looRatio: number;
-  readonly looPasses: boolean;
 }
 
 /** Highest order in the table keeping at least `minResidualDof` residual dof, or null. */
@@ -70,41 +74,48 @@ function guardedMaximum(table: CandidateTable, minResidualDof: number): number |
   return null;
 }
 
-function bestPress(table: CandidateTable, highest: number): { order: number; press: number } {
-  let best = { order: table.minCandidate, press: Infinity };
-  for (let order = table.minCandidate; order <= highest; order++) {
-    const press = fitOfOrder(table, order).press;
-    if (press < best.press * (1 - 1e-12)) best = { order, press };
+/** The first higher order (ascending) that beats `order` under the rule, or null. */
+function firstImprovement(table: CandidateTable, parameters: LowestJustifiedParameters, order: number, highest: number): Improvement | null {
+  const comparisons = highest - order;
+  const level = parameters.multiplicity === 'bonferroni' && comparisons > 0 ? parameters.alpha / comparisons : parameters.alpha;
+  const lower = fitOfOrder(table, order);
+  for (let candidate = order + 1; candidate <= highest; candidate++) {
+    const higher = fitOfOrder(table, candidate);
+    const test = extraSumOfSquaresF(lower, higher);
+    const looRatio = Math.sqrt(lower.press / higher.press);
+    let kind: Improvement['kind'] | null = null;
+    if (isSignificant(test, level)) {
+      kind = 'significant';
+    } else if (
+      parameters.looTolerance !== null &&
+      looRatio > 1 + parameters.looTolerance &&
+      (parameters.looConfirmAlpha === null || isSignificant(test, parameters.looConfirmAlpha))
+    ) {
+      kind = 'prediction';
+    }
+    if (kind !== null) {
+      return { against: candidate, statistic: test.statistic, p: extraSumOfSquaresP(test), level, comparisons, kind, looRatio };
+    }
+  }
+  return null;
+}
+
+/** The smallest unadjusted p of `order` against the higher orders, for the reason sentence. */
+function strongestComparison(table: CandidateTable, order: number, highest: number): { against: number; statistic: number; p: number } {
+  let best = { against: order, statistic: 0, p: Infinity };
+  for (let candidate = order + 1; candidate <= highest; candidate++) {
+    const test = extraSumOfSquaresF(fitOfOrder(table, order), fitOfOrder(table, candidate));
+    const p = extraSumOfSquaresP(test);
+    if (p < best.p) best = { against: candidate, statistic: test.statistic, p };
   }
   return best;
 }
 
-function verdict(table: CandidateTable, parameters: LowestJustifiedParameters, order: number, highest: number, withP: boolean): OrderVerdict {
-  const comparisons = highest - order;
-  const level = parameters.multiplicity === 'bonferroni' && comparisons > 0 ? parameters.alpha / comparisons : parameters.alpha;
-  const lower = fitOfOrder(table, order);
-  let significant = false;
-  let smallestP = Infinity;
-  let against = order;
-  let statistic = 0;
-  for (let higher = order + 1; higher <= highest; higher++) {
-    const test = extraSumOfSquaresF(lower, fitOfOrder(table, higher));
-    if (isSignificant(test, level)) significant = true;
-    if (withP) {
-      const p = extraSumOfSquaresP(test);
-      if (p < smallestP) {
-        smallestP = p;
-        against = higher;
-        statistic = test.statistic;
-      }
-    } else if (significant) {
-      break;
-    }
+function describeImprovement(order: number, improvement: Improvement): string {
+  if (improvement.kind === 'significant') {
+    return `order ${order} is improved on by order ${improvement.against} (F = ${formatNumber(improvement.statistic)}, p = ${formatP(improvement.p)} < ${formatP(improvement.level)})`;
   }
-  const best = bestPress(table, highest);
-  const looRatio = Math.sqrt(lower.press / best.press);
-  const looPasses = parameters.looTolerance === null || looRatio <= 1 + parameters.looTolerance;
-  return { order, comparisons, level, smallestP, against, statistic, significant, looRatio, looPasses };
+  return `order ${order} is improved on by order ${improvement.against}, which predicts left-out points ${formatNumber(100 * (improvement.looRatio - 1))} % better and is significant at 5 % (F = ${formatNumber(improvement.statistic)}, p = ${formatP(improvement.p)})`;
 }
 
 /**
@@ -113,47 +124,44 @@ function verdict(table: CandidateTable, parameters: LowestJustifiedParameters, o
  * createLowestJustifiedCriterion({ ...LOWEST_JUSTIFIED_DEFAULTS, looTolerance: null }).choose(table)
  */
 export function createLowestJustifiedCriterion(parameters: LowestJustifiedParameters): OrderCriterion {
-  const looText = parameters.looTolerance === null ? '' : `, and whose leave-one-out RMSE is within ${Math.round(100 * parameters.looTolerance)} % of the best`;
-  const levelText = parameters.multiplicity === 'bonferroni' ? `${parameters.alpha} split over the comparisons (Bonferroni)` : `${parameters.alpha} each`;
+  const levelText = parameters.multiplicity === 'bonferroni' ? `${parameters.alpha} split over the orders compared (Bonferroni)` : `${parameters.alpha} each`;
+  const looText =
+    parameters.looTolerance === null
+      ? ''
+      : `, or predicts left-out points more than ${Math.round(100 * parameters.looTolerance)} % better (leave-one-out RMSE)${parameters.looConfirmAlpha === null ? '' : ` while being significant at ${parameters.looConfirmAlpha}`}`;
   return {
     name: 'lowestJustified',
-    label: `lowest justified (α=${parameters.alpha}${parameters.multiplicity === 'bonferroni' ? ' Bonf.' : ''}, τ=${parameters.looTolerance ?? 'off'})`,
-    rule: `Choose the lowest order, keeping at least ${parameters.minResidualDof} residual degrees of freedom, that no higher order improves on significantly (extra-sum-of-squares F test at ${levelText})${looText}.`,
+    label: `lowest justified (α=${parameters.alpha}${parameters.multiplicity === 'bonferroni' ? ' Bonf.' : ''}, τ=${parameters.looTolerance ?? 'off'}${parameters.looConfirmAlpha === null ? '' : `, confirm ${parameters.looConfirmAlpha}`})`,
+    rule: `Choose the lowest order, keeping at least ${parameters.minResidualDof} residual degrees of freedom, that no higher order improves on: a higher order improves on it if its extra-sum-of-squares F test is significant at ${levelText}${looText}.`,
     requiresUncertainty: false,
     choose(table: CandidateTable): number {
       const highest = guardedMaximum(table, parameters.minResidualDof);
       if (highest === null) return table.minCandidate;
-      const best = bestPress(table, highest);
-      const pressLimit = parameters.looTolerance === null ? Infinity : best.press * (1 + parameters.looTolerance) ** 2;
-      for (let order = table.minCandidate; order <= highest; order++) {
-        if (fitOfOrder(table, order).press > pressLimit) continue;
-        if (!verdict(table, { ...parameters, looTolerance: null }, order, highest, false).significant) return order;
+      for (let order = table.minCandidate; order < highest; order++) {
+        if (firstImprovement(table, parameters, order, highest) === null) return order;
       }
-      return best.order;
+      return highest;
     },
     explain(table: CandidateTable, order: number): string {
       const highest = guardedMaximum(table, parameters.minResidualDof);
       if (highest === null) {
         return `Order ${order}: forced, because no candidate order leaves ${parameters.minResidualDof} residual degrees of freedom with ${table.n} points.`;
       }
-      const chosen = verdict(table, parameters, order, highest, true);
       let why: string;
-      if (chosen.significant || !chosen.looPasses) {
-        why = `no order passes both tests, so the order with the smallest leave-one-out RMSE is taken`;
-      } else if (chosen.comparisons === 0) {
-        why = `it is the highest order that keeps ${parameters.minResidualDof} residual degrees of freedom`;
+      if (order >= highest) {
+        why = `it is the highest order that keeps ${parameters.minResidualDof} residual degrees of freedom, and every lower order is improved on`;
       } else {
-        why = `no higher order up to ${highest} improves on it significantly (smallest p = ${formatP(chosen.smallestP)} against order ${chosen.against}, F = ${formatNumber(chosen.statistic)}; Bonferroni level ${formatP(chosen.level)} over ${chosen.comparisons} comparison${chosen.comparisons === 1 ? '' : 's'})`;
+        const strongest = strongestComparison(table, order, highest);
+        const comparisons = highest - order;
+        const level = parameters.multiplicity === 'bonferroni' ? parameters.alpha / comparisons : parameters.alpha;
+        why = `no higher order up to ${highest} improves on it (smallest p = ${formatP(strongest.p)} against order ${strongest.against}, F = ${formatNumber(strongest.statistic)}, above the level ${formatP(level)} = ${parameters.alpha}/${comparisons}${parameters.looTolerance === null ? '' : `, and no higher order predicts left-out points more than ${Math.round(100 * parameters.looTolerance)} % better with significance`})`;
       }
-      const looNote = parameters.looTolerance === null ? '' : `; its leave-one-out RMSE is ${formatNumber(100 * (chosen.looRatio - 1))} % above the best`;
       let lowerNote = '';
-      if (order > table.minCandidate && !(chosen.significant || !chosen.looPasses)) {
-        const previous = verdict(table, parameters, order - 1, highest, true);
-        lowerNote = !previous.looPasses
-          ? `; order ${order - 1}'s leave-one-out RMSE is ${formatNumber(100 * (previous.looRatio - 1))} % above the best (limit ${formatNumber(100 * (parameters.looTolerance ?? 0))} %)`
-          : `; order ${order - 1} is improved on by order ${previous.against} (F = ${formatNumber(previous.statistic)}, p = ${formatP(previous.smallestP)} < ${formatP(previous.level)})`;
+      if (order > table.minCandidate) {
+        const improvement = firstImprovement(table, parameters, order - 1, highest);
+        if (improvement) lowerNote = `; ${describeImprovement(order - 1, improvement)}`;
       }
-      return `Order ${order}: ${why}${looNote}${lowerNote}.`;
+      return `Order ${order}: ${why}${lowerNote}.`;
     },
   };
 }

@@ -5,7 +5,8 @@
  *   S_r = Σ e_i²,  s² = S_r/dof,  R² = 1 − S_r/S_t (S_t centred, or Σ w v² without intercept),
  *   adjusted R² = 1 − (S_r/dof)/(S_t/(n − 1))  (n in place of n − 1 without intercept),
  *   PRESS = Σ (e_i/(1 − h_ii))²  (leave-one-out residuals without refitting),
- *   AICc = n·ln(S_r/n) + 2K + 2K(K + 1)/(n − K − 1),  BIC = n·ln(S_r/n) + K·ln n,  K = p + 1 (σ counted),
+ *   AICc = n·ln(S_r/n) + n(n + p)/(n − p − 2),  BIC = n·ln(S_r/n) + p·ln n  (the same definitions as the order
+ *   table, src/core/order; they differ from the forms with K = p + 1 parameters only by constants),
  *   externally studentized t_i = e_i / (s_(i)·√(1 − h_ii)),  s_(i)² = (S_r − e_i²/(1 − h_ii))/(dof − 1),
  *   Cook's D_i = e_i²·h_ii / (p·s²·(1 − h_ii)²).
  * References: D. A. Belsley, E. Kuh, R. E. Welsch, Regression Diagnostics, Wiley 1980; C. M. Hurvich and C.-L. Tsai,
@@ -61,7 +62,6 @@ export function residualStatistics(
     press += oneMinusH > 1e-12 ? (e / oneMinusH) ** 2 : Infinity;
   }
   const residualVariance = dof > 0 ? residualSumOfSquares / dof : NaN;
-  const K = parameters + 1;
   const logTerm = n * Math.log(residualSumOfSquares / n);
   const studentized: number[] = [];
   const cooksDistance: number[] = [];
@@ -82,8 +82,8 @@ export function residualStatistics(
     rmse: Math.sqrt(residualSumOfSquares / n),
     press,
     looRmse: Math.sqrt(press / n),
-    aicc: n - K - 1 > 0 ? logTerm + 2 * K + (2 * K * (K + 1)) / (n - K - 1) : Infinity,
-    bic: logTerm + K * Math.log(n),
+    aicc: n - parameters - 2 > 0 ? logTerm + (n * (n + parameters)) / (n - parameters - 2) : NaN,
+    bic: logTerm + parameters * Math.log(n),
     studentized,
     cooksDistance,
   };

@@ -1,0 +1,17 @@
+/**
+ * The cautions that go with every published correlation, page and download. One wording, kept here so the CLI,
+ * the pages and the coefficient files cannot drift apart.
+ */
+export const CAUTIONS: readonly string[] = [
+  'Valid only inside the fitted range; outside it the correlation is an extrapolation and may be badly wrong.',
+  'Not for design use without checking against the applicable codes and standards and the judgement of a qualified engineer.',
+];
+
+/** The cautions for one fit, naming its range. */
+export function cautionsFor(range: { readonly min: number; readonly max: number }, unit = ''): string[] {
+  const suffix = unit ? ` ${unit}` : '';
+  return [
+    `Valid only for ${range.min}${suffix} ≤ x ≤ ${range.max}${suffix} (the fitted range); outside it the correlation is an extrapolation and may be badly wrong.`,
+    CAUTIONS[1]!,
+  ];
+}

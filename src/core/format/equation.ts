@@ -1,0 +1,60 @@
+/**
+ * The fitted equation as text: TeX for the pages (rendered by KaTeX at build time, no katex import here) and plain
+ * text for the terminal. Coefficients carry the digits that significantDigits asks for.
+ */
+import { formatCoefficient } from './formatCoefficient.ts';
+import type { PolynomialFit } from '../types.ts';
+
+export interface EquationSymbols {
+  /** Symbol of the independent variable, e.g. 'T' (TeX allowed). */
+  readonly x: string;
+  /** Symbol of the property, e.g. 'c_p'. */
+  readonly y: string;
+}
+
+function variableTex(fit: PolynomialFit, x: string): string {
+  if (fit.transformX === 'reciprocal') return `(1/${x})`;
+  if (fit.transformX === 'log') return `(\\ln ${x})`;
+  return x;
+}
+
+function variablePlain(fit: PolynomialFit, x: string): string {
+  if (fit.transformX === 'reciprocal') return `(1/${x})`;
+  if (fit.transformX === 'log') return `ln(${x})`;
+  return x;
+}
+
+function texNumber(text: string): string {
+  const match = /^(-?[\d.]+)e([+-]?\d+)$/.exec(text);
+  return match ? `${match[1]}\\times10^{${Number(match[2])}}` : text;
+}
+
+/** TeX of v = Σ a_k u^k, e.g. "c_p = 1.23 + 4.5\\times10^{-3}\\,T". */
+export function equationTex(fit: PolynomialFit, symbols: EquationSymbols): string {
+  const u = variableTex(fit, symbols.x);
+  const lhs = fit.transformY === 'log' ? `\\ln ${symbols.y}` : symbols.y;
+  const terms: string[] = [];
+  fit.coefficients.forEach((a, k) => {
+    if (k === 0 && !fit.intercept) return;
+    const text = formatCoefficient(Math.abs(a), fit.significantDigits[k]!);
+    const sign = a < 0 ? '-' : '+';
+    const power = k === 0 ? '' : k === 1 ? `\\,${u}` : `\\,${u}^{${k}}`;
+    terms.push(`${terms.length === 0 ? (a < 0 ? '-' : '') : ` ${sign} `}${texNumber(text)}${power}`);
+  });
+  return `${lhs} = ${terms.join('')}`;
+}
+
+/** Plain-text equation for terminals, e.g. "y = 1.23 + 4.5e-3*x - 6.7e-6*x^2". */
+export function equationPlain(fit: PolynomialFit, symbols: EquationSymbols): string {
+  const u = variablePlain(fit, symbols.x);
+  const lhs = fit.transformY === 'log' ? `ln(${symbols.y})` : symbols.y;
+  const terms: string[] = [];
+  fit.coefficients.forEach((a, k) => {
+    if (k === 0 && !fit.intercept) return;
+    const text = formatCoefficient(Math.abs(a), fit.significantDigits[k]!);
+    const sign = a < 0 ? '-' : '+';
+    const power = k === 0 ? '' : k === 1 ? `*${u}` : `*${u}^${k}`;
+    terms.push(`${terms.length === 0 ? (a < 0 ? '-' : '') : ` ${sign} `}${text}${power}`);
+  });
+  return `${lhs} = ${terms.join('')}`;
+}

@@ -1,0 +1,28 @@
+/**
+ * The numerical core's only public door. Pure: no Astro, no DOM, no file I/O. Results are plain JSON data.
+ */
+
+// Types
+export type * from './types.ts';
+
+// Fitting
+export { fitPolynomial } from './fitPolynomial.ts';
+export { FitError } from './fitError.ts';
+export { validateFitData } from './validateFitInput.ts';
+export { domainMap, toUnit } from './domain.ts';
+export { mappedToPower, mappedCovarianceToPower } from './convertBasis.ts';
+export { forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+
+// Evaluation and bands
+export { evaluateFit, basisAt, horner, type Evaluation } from './evaluate.ts';
+export { bands, type BandPoint } from './stats/bands.ts';
+
+// Formatting for publication
+export { CAUTIONS, cautionsFor } from './format/cautions.ts';
+export { equationTex, equationPlain, type EquationSymbols } from './format/equation.ts';
+export { formatCoefficient } from './format/formatCoefficient.ts';
+export { roundSignificant } from './format/roundSignificant.ts';
+export { significantDigits } from './format/significantDigits.ts';
+
+// Distributions (thin wrapper over @stdlib)
+export { tQuantile, tTwoSidedP, fQuantile, fUpperP, chiSquareQuantile, chiSquareUpperP, normalQuantile } from './distributions.ts';

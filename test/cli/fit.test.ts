@@ -1,0 +1,108 @@
+/**
+ * `correlary fit`: JSON output on the NIST StRD problems (certified values from NIST, test/fixtures/nist-strd),
+ * the human report, and one-line errors for bad input.
+ */
+import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+import { lre } from '../helpers/lre.ts';
+import { nistDatToCsv, nistDatasets, powerOf } from '../helpers/nist.ts';
+import { runCli } from '../helpers/runCli.ts';
+
+const dir = mkdtempSync(join(tmpdir(), 'correlary-fit-'));
+function csvFile(name: string, text: string): string {
+  const file = join(dir, name);
+  writeFileSync(file, text);
+  return file;
+}
+
+describe('correlary fit --json on NIST StRD', () => {
+  for (const [name, dataset] of Object.entries(nistDatasets)) {
+    it(`correlary fit ${name}.csv --order ${dataset.model.degree} --json reaches LRE ≥ 12`, async () => {
+      const file = csvFile(`${name}.csv`, nistDatToCsv(name));
+      const args = ['fit', file, '--x', 'x', '--y', 'y', '--order', String(dataset.model.degree), '--json'];
+      if (!dataset.model.intercept) args.push('--no-intercept');
+      const { code, stdout } = await runCli(args);
+      expect(code).toBe(0);
+      const result = JSON.parse(stdout);
+      expect(result.n).toBe(dataset.observations);
+      expect(result.order).toBe(dataset.model.degree);
+      if (!dataset.model.intercept) expect(result.coefficients[0]).toBe(0);
+      const scores: number[] = [];
+      for (const parameter of dataset.certified.parameters) {
+        const k = powerOf(parameter.name);
+        scores.push(lre(result.coefficients[k], parameter.estimate.value!));
+        scores.push(lre(result.standardErrors[k], parameter.standardDeviation.value!));
+      }
+      scores.push(lre(result.residualStdDev, dataset.certified.residualStandardDeviation.value!));
+      scores.push(lre(result.rSquared, dataset.certified.rSquared.value!));
+      expect(Math.min(...scores)).toBeGreaterThanOrEqual(12);
+      expect(result.range).toEqual({ min: Math.min(...dataset.data.x), max: Math.max(...dataset.data.x) });
+      expect(result.cautions.join(' ')).toMatch(/qualified engineer/);
+    });
+  }
+});
+
+describe('correlary fit report', () => {
+  it('correlary fit prints the equation, the chosen order with its reason, check values and the cautions', async () => {
+    // y = 2 + 3x − 0.5x² exactly (a value computed by hand), with x far from zero.
+    const rows = Array.from({ length: 12 }, (_, i) => {
+      const x = 300 + 25 * i;
+      return `${x},${2 + 3 * x - 0.5 * x * x}`;
+    });
+    const file = csvFile('quadratic.csv', `T,cp\n${rows.join('\n')}\n`);
+    const { code, stdout } = await runCli(['fit', file, '--order', '2']);
+    expect(code).toBe(0);
+    expect(stdout).toContain('y = 2 + 3*x - 0.5*x^2');
+    expect(stdout).toMatch(/Order 2/);
+    expect(stdout).toMatch(/Check values/);
+    expect(stdout).toMatch(/x = 575\s+y = -163585\.5/); // 2 + 3·575 − 0.5·575² = −163585.5
+    expect(stdout).toMatch(/not for design use/i);
+  });
+});
+
+describe('correlary fit bad input', () => {
+  const cases: [string, string, string[], RegExp][] = [
+    ['non-numeric cell', 'x,y\n1,2\n2,abc\n3,4\n', [], /bad\.csv:3: 'abc' in column 'y' is not a number$/],
+    ['NaN', 'x,y\n1,2\n2,NaN\n3,4\n', [], /bad\.csv:3: 'NaN' in column 'y' is not a finite number$/],
+    ['Infinity', 'x,y\n1,2\n2,3\nInfinity,4\n', [], /bad\.csv:4: 'Infinity' in column 'x' is not a finite number$/],
+    ['empty cell', 'x,y\n1,2\n2,\n3,4\n', [], /bad\.csv:3: empty cell in column 'y'$/],
+    ['decimal comma', 'x;y\n1,5;2\n', [], /bad\.csv:1: the columns are separated by semicolons/],
+    ['unknown column', 'x,y\n1,2\n2,3\n3,4\n', ['--y', 'cp'], /bad\.csv:1: no column named 'cp' for y \(columns: x, y\)$/],
+    ['constant x', 'x,y\n1,2\n1,3\n1,4\n', [], /bad\.csv: all x values are equal/],
+    ['too few points', 'x,y\n1,2\n2,3\n', [], /bad\.csv: .*at least three points/],
+    ['log of a negative value', 'x,y\n1,2\n2,-3\n3,4\n4,5\n', ['--transform-y', 'log'], /bad\.csv:3: y = -3 is not positive, so ln y is undefined$/],
+    ['ragged row', 'x,y\n1,2\n2,3,4\n', [], /bad\.csv:3: malformed CSV/],
+    ['order too high', 'x,y\n1,2\n2,3\n3,5\n4,4\n', ['--order', '4'], /bad\.csv: /],
+  ];
+  for (const [label, text, extra, expected] of cases) {
+    it(`correlary fit reports ${label} in one line with file and line`, async () => {
+      const file = csvFile('bad.csv', text);
+      const { code, stderr, stdout } = await runCli(['fit', file, ...extra]);
+      expect(code).toBe(1);
+      expect(stdout).toBe('');
+      expect(stderr.split('\n')).toHaveLength(1);
+      expect(stderr).toMatch(expected);
+    });
+  }
+
+  it('correlary fit reports a missing file in one line', async () => {
+    const { code, stderr } = await runCli(['fit', join(dir, 'nope.csv')]);
+    expect(code).toBe(1);
+    expect(stderr).toMatch(/nope\.csv: cannot read the file/);
+  });
+
+  it('bin/correlary.mjs runs as a program: exit status 1, one line on stderr, no stack trace', () => {
+    const bin = fileURLToPath(new URL('../../bin/correlary.mjs', import.meta.url));
+    const file = csvFile('bin.csv', 'x,y\n1,2\n2,oops\n');
+    const result = spawnSync(process.execPath, [bin, 'fit', file], { encoding: 'utf8' });
+    expect(result.status).toBe(1);
+    expect(result.stderr.trim().split('\n')).toHaveLength(1);
+    expect(result.stderr).toMatch(/bin\.csv:3: 'oops' in column 'y' is not a number/);
+    const ok = execFileSync(process.execPath, [bin, 'fit', csvFile('ok.csv', 'x,y\n1,1\n2,4\n3,9\n4,16\n5,25\n'), '--order', '2', '--json'], { encoding: 'utf8' });
+    expect(JSON.parse(ok).coefficients).toEqual([0, 0, 1]);
+  });
+});
