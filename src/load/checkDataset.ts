@@ -1,0 +1,131 @@
+/**
+ * Checks that need both files: exclusions, point counts, transforms, repeated x, validity range and
+ * pass-through points. Every message points at the line to change.
+ */
+import type { CorrelationMeta, DataPoint, ExcludedPoint } from '../schema/index.ts';
+import { error, warning, type Diagnostic, type Position } from './diagnostic.ts';
+import { MINIMUM_POINTS } from './limits.ts';
+
+export interface DatasetCheckInput {
+  readonly meta: CorrelationMeta;
+  readonly points: readonly DataPoint[];
+  readonly dataPath: string;
+  readonly metadataPath: string;
+  readonly headerLine: number;
+  /** Position of a key path's value in the metadata file. */
+  readonly valueAt: (path: readonly (string | number)[]) => Position;
+  /** 1-based column of the x and y cells of a data line, when known. */
+  readonly cellColumn: (line: number, role: 'x' | 'y') => number | undefined;
+}
+
+export interface DatasetCheckResult {
+  readonly used: DataPoint[];
+  readonly excluded: ExcludedPoint[];
+  readonly dataRange: { min: number; max: number };
+  readonly range: { min: number; max: number };
+  readonly diagnostics: Diagnostic[];
+}
+
+/** Run every cross-file check. The result's lists are meaningful only when no error was reported. */
+export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
+  const { meta, points, dataPath, metadataPath, valueAt } = input;
+  const fit = meta.fit;
+  const diagnostics: Diagnostic[] = [];
+
+  // Exclusions: by data row or by exact x; each must match something.
+  const reasons = new Map<number, string>();
+  fit.exclude.forEach((exclusion, index) => {
+    if (exclusion.row !== undefined) {
+      if (exclusion.row > points.length) {
+        diagnostics.push(error(metadataPath, valueAt(['fit', 'exclude', index, 'row']), `fit.exclude[${index}].row is ${exclusion.row} but the data file has ${points.length} rows`));
+        return;
+      }
+      if (reasons.has(exclusion.row)) {
+        diagnostics.push(warning(metadataPath, valueAt(['fit', 'exclude', index]), `row ${exclusion.row} is excluded twice`));
+      }
+      reasons.set(exclusion.row, exclusion.reason);
+    } else {
+      const matches = points.filter((point) => point.x === exclusion.x);
+      if (matches.length === 0) {
+        diagnostics.push(error(metadataPath, valueAt(['fit', 'exclude', index, 'x']), `no data row has x = ${exclusion.x}`, 'x must equal the value in the data file exactly; or exclude by row'));
+      }
+      for (const point of matches) reasons.set(point.row, exclusion.reason);
+    }
+  });
+  const used = points.filter((point) => !reasons.has(point.row));
+  const excluded = points
+    .filter((point) => reasons.has(point.row))
+    .map((point) => ({ ...point, reason: reasons.get(point.row) ?? '' }));
+
+  // Enough points, and more than one x.
+  const distinctX = new Set(used.map((point) => point.x)).size;
+  if (used.length < MINIMUM_POINTS) {
+    diagnostics.push(
+      error(dataPath, { line: input.headerLine }, `only ${used.length} ${used.length === 1 ? 'point is' : 'points are'} left to fit; a correlation needs at least ${MINIMUM_POINTS}`),
+    );
+  } else if (distinctX < 2) {
+    diagnostics.push(error(dataPath, { line: input.headerLine }, `every point has x = ${used[0]?.x}; a correlation needs at least two different x values`));
+  }
+
+  // A fixed order must leave at least one residual degree of freedom and needs order + 1 distinct x values.
+  if (typeof fit.order === 'number' && used.length >= MINIMUM_POINTS) {
+    const coefficients = (fit.intercept ? fit.order + 1 : fit.order) - fit.passThrough.length;
+    if (used.length <= coefficients) {
+      diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} needs at least ${coefficients + 1} points, but ${used.length} are used`));
+    } else if (distinctX <= fit.order) {
+      diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} needs at least ${fit.order + 1} different x values, but the data have ${distinctX}`));
+    }
+  }
+
+  // Transforms: ln needs positive values, 1/x needs non-zero x.
+  const transformHint = 'leave the row out with fit.exclude, or choose another transform';
+  for (const point of used) {
+    if (fit.transform.x === 'log' && !(point.x > 0)) {
+      diagnostics.push(error(dataPath, { line: point.line, column: input.cellColumn(point.line, 'x') }, `x = ${point.x} is not positive, but fit.transform.x is 'log'`, transformHint));
+    }
+    if (fit.transform.x === 'reciprocal' && point.x === 0) {
+      diagnostics.push(error(dataPath, { line: point.line, column: input.cellColumn(point.line, 'x') }, "x = 0 has no reciprocal, but fit.transform.x is 'reciprocal'", transformHint));
+    }
+    if (fit.transform.y === 'log' && !(point.y > 0)) {
+      diagnostics.push(error(dataPath, { line: point.line, column: input.cellColumn(point.line, 'y') }, `y = ${point.y} is not positive, but fit.transform.y is 'log'`, transformHint));
+    }
+  }
+
+  // Repeated x with different y and nothing to say how much y scatters.
+  if (meta.data.uncertainty === undefined && !meta.data.replicates) {
+    const firstAt = new Map<number, DataPoint>();
+    const warned = new Set<number>();
+    for (const point of used) {
+      const first = firstAt.get(point.x);
+      if (first === undefined) firstAt.set(point.x, point);
+      else if (first.y !== point.y && !warned.has(point.x)) {
+        warned.add(point.x);
+        diagnostics.push(
+          warning(dataPath, { line: point.line }, `x = ${point.x} repeats line ${first.line} with a different y, and there is no uncertainty column`, 'set data.replicates: true if these are replicate measurements, or add an uncertainty column'),
+        );
+      }
+    }
+  }
+
+  // Validity range: the data's x range, narrowed but never widened.
+  const xs = used.map((point) => point.x);
+  const dataRange = { min: Math.min(...xs), max: Math.max(...xs) };
+  const range = { min: fit.range?.min ?? dataRange.min, max: fit.range?.max ?? dataRange.max };
+  if (used.length > 0) {
+    if (fit.range?.min !== undefined && (fit.range.min < dataRange.min || fit.range.min >= dataRange.max)) {
+      diagnostics.push(error(metadataPath, valueAt(['fit', 'range', 'min']), `fit.range.min ${fit.range.min} is outside the x range of the data (${dataRange.min} to ${dataRange.max})`, 'the validity range can be narrowed, never widened'));
+    }
+    if (fit.range?.max !== undefined && (fit.range.max > dataRange.max || fit.range.max <= dataRange.min)) {
+      diagnostics.push(error(metadataPath, valueAt(['fit', 'range', 'max']), `fit.range.max ${fit.range.max} is outside the x range of the data (${dataRange.min} to ${dataRange.max})`, 'the validity range can be narrowed, never widened'));
+    }
+    fit.passThrough.forEach((point, index) => {
+      if (point.x < range.min || point.x > range.max) {
+        diagnostics.push(error(metadataPath, valueAt(['fit', 'passThrough', index, 'x']), `pass-through point x = ${point.x} is outside the validity range ${range.min} to ${range.max}`));
+      }
+      if (fit.transform.y === 'log' && !(point.y > 0)) {
+        diagnostics.push(error(metadataPath, valueAt(['fit', 'passThrough', index, 'y']), `pass-through point y = ${point.y} is not positive, but fit.transform.y is 'log'`));
+      }
+    });
+  }
+  return { used, excluded, dataRange, range, diagnostics };
+}

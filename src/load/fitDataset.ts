@@ -1,0 +1,68 @@
+/**
+ * Fit a validated correlation: choose the order (or take the fixed one), then fit it with the pass-through
+ * constraints. Core failures become file messages: a FitError naming a point points at that point's data line.
+ */
+import { FitError, fitPolynomial, type FitData, type PolynomialFit } from '../core/index.ts';
+import { selectOrder, type OrderSelection } from '../core/order/index.ts';
+import { error, warning, type Diagnostic } from './diagnostic.ts';
+import type { LoadedCorrelation } from './types.ts';
+
+export interface DatasetFit {
+  /** The fit, or undefined when the core refused the data. */
+  readonly fit: PolynomialFit | undefined;
+  /** The order table and the reason for the chosen order. */
+  readonly selection: OrderSelection | undefined;
+  /** Errors (the fit failed) and warnings from the order selector and the fit. */
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+/** Turn a FitError into a message at the data line of its point, or at fit.order in the metadata. */
+function fitErrorDiagnostic(correlation: LoadedCorrelation, caught: FitError): Diagnostic {
+  const point = caught.pointIndex === undefined ? undefined : correlation.used[caught.pointIndex];
+  if (point !== undefined) {
+    return error(correlation.dataPath, { line: point.line }, `cannot fit this point: ${caught.message}`);
+  }
+  return error(correlation.metadataPath, correlation.orderPosition, `cannot fit: ${caught.message}`);
+}
+
+/**
+ * Fit one loaded correlation.
+ * @example fitDataset(loaded).fit?.order // => 3
+ */
+export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
+  const fitSettings = correlation.meta.fit;
+  const data: FitData = {
+    x: correlation.used.map((point) => point.x),
+    y: correlation.used.map((point) => point.y),
+    uncertainty: fitSettings.weights === 'uncertainty' ? correlation.used.map((point) => point.uncertainty ?? NaN) : undefined,
+  };
+  const common = {
+    intercept: fitSettings.intercept,
+    transformX: fitSettings.transform.x,
+    transformY: fitSettings.transform.y,
+  };
+  const diagnostics: Diagnostic[] = [];
+  let selection: OrderSelection | undefined;
+  let fit: PolynomialFit | undefined;
+  try {
+    selection = selectOrder(data, {
+      ...common,
+      maxOrder: fitSettings.maxOrder,
+      ...(fitSettings.criterion === undefined ? {} : { criterion: fitSettings.criterion }),
+      ...(typeof fitSettings.order === 'number' ? { fixedOrder: fitSettings.order, reason: fitSettings.reason ?? '' } : {}),
+    });
+    fit = fitPolynomial(data, {
+      ...common,
+      order: selection.order,
+      constraints: fitSettings.passThrough.map((point) => ({ x: point.x, y: point.y })),
+    });
+  } catch (caught) {
+    if (!(caught instanceof FitError)) throw caught;
+    diagnostics.push(fitErrorDiagnostic(correlation, caught));
+  }
+  const coreWarnings = [...(selection?.warnings ?? []), ...(fit?.warnings ?? [])];
+  for (const text of coreWarnings) {
+    diagnostics.push(warning(correlation.metadataPath, correlation.orderPosition, text.replace(/\.$/, '')));
+  }
+  return { fit, selection, diagnostics };
+}

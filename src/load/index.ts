@@ -1,0 +1,17 @@
+/**
+ * Reading and validating handbook folders (Node only: file I/O). Used by the CLI and the Astro loader.
+ */
+
+// reading
+export { readHandbook, type HandbookResult } from './readHandbook.ts';
+export { readDataset } from './readDataset.ts';
+export type { DatasetResult, LoadedCorrelation } from './types.ts';
+
+// fitting a loaded correlation
+export { fitDataset, type DatasetFit } from './fitDataset.ts';
+
+// messages
+export { formatDiagnostic, sortDiagnostics, hasErrors, error, warning, type Diagnostic, type Position } from './diagnostic.ts';
+
+// limits
+export { DATA_FILE_LIMIT_BYTES, METADATA_FILE_LIMIT_BYTES, MESSAGES_PER_FILE, MINIMUM_POINTS } from './limits.ts';

@@ -1,0 +1,51 @@
+/**
+ * Read every correlation folder under a content directory and check that slugs are unique.
+ */
+import { readdir, stat } from 'node:fs/promises';
+import path from 'node:path';
+import { SLUG_PATTERN } from '../schema/index.ts';
+import { error, type Diagnostic } from './diagnostic.ts';
+import { readDataset } from './readDataset.ts';
+import type { DatasetResult } from './types.ts';
+
+export interface HandbookResult {
+  /** One result per folder, sorted by folder name. */
+  readonly datasets: readonly DatasetResult[];
+  /** Problems that concern more than one folder (duplicate slugs) or the directory itself. */
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+/**
+ * Read all correlation folders in `directory`. Folders whose names start with '.' or '_' are skipped, so drafts
+ * can be parked as `_draft-name`. Loose files at the top level are ignored.
+ * @throws Error `readHandbook requires a directory` when `directory` is not one
+ */
+export async function readHandbook(directory: string): Promise<HandbookResult> {
+  const info = await stat(directory).catch(() => undefined);
+  if (info === undefined || !info.isDirectory()) throw new Error('readHandbook requires a directory');
+  const entries = await readdir(directory, { withFileTypes: true });
+  const folders = entries
+    .filter((entry) => entry.isDirectory() && !entry.name.startsWith('.') && !entry.name.startsWith('_'))
+    .map((entry) => entry.name)
+    .sort();
+  const datasets = await Promise.all(folders.map((name) => readDataset(path.join(directory, name))));
+  const diagnostics: Diagnostic[] = [];
+
+  const bySlug = new Map<string, DatasetResult[]>();
+  for (const dataset of datasets) {
+    if (!SLUG_PATTERN.test(dataset.slug)) {
+      diagnostics.push(
+        error(dataset.folder, { line: 0 }, `folder name '${dataset.slug}' is not a valid slug`, 'use lower-case letters and digits joined by single hyphens, or set slug: in the metadata'),
+      );
+    }
+    bySlug.set(dataset.slug, [...(bySlug.get(dataset.slug) ?? []), dataset]);
+  }
+  for (const [slug, group] of bySlug) {
+    if (group.length < 2) continue;
+    for (const dataset of group) {
+      const others = group.filter((other) => other !== dataset).map((other) => other.metadataPath);
+      diagnostics.push(error(dataset.metadataPath, { line: dataset.slugLine }, `slug '${slug}' is also used by ${others.join(', ')}`, 'set a different slug: in one of them'));
+    }
+  }
+  return { datasets, diagnostics };
+}

@@ -1,0 +1,76 @@
+/**
+ * Parse and validate a correlation's metadata file, reporting every problem with its line and column.
+ */
+import { LineCounter, parseDocument, type Document } from 'yaml';
+import { correlationMetaSchema, dataColumnsSchema, type CorrelationMeta, type DataColumns } from '../schema/index.ts';
+import { error, warning, type Diagnostic, type Position } from './diagnostic.ts';
+import { keyPosition, valuePosition } from './yamlPositions.ts';
+import { issueToProblems } from './zodMessages.ts';
+
+/** Result of reading the metadata text: what could be validated, plus positions for later messages. */
+export interface MetadataResult {
+  /** The validated metadata, when it has no problems. */
+  readonly meta: CorrelationMeta | undefined;
+  /** The data block alone, when it validates even though other keys do not (so the CSV can still be checked). */
+  readonly dataColumns: DataColumns | undefined;
+  readonly diagnostics: Diagnostic[];
+  /** Position of a value (or, when absent, its nearest ancestor key) in the metadata file. */
+  readonly valueAt: (path: readonly (string | number)[]) => Position;
+}
+
+/** First line of a YAML parser message, without its own "at line …" suffix. */
+function yamlMessage(message: string): string {
+  const first = message.split('\n')[0] ?? message;
+  return first.replace(/ at line \d+, column \d+:?$/, '').replace(/\.$/, '');
+}
+
+/**
+ * Parse YAML text (BOM already removed) and validate it against the metadata schema.
+ * @param displayPath path printed in messages
+ */
+export function readMetadata(text: string, displayPath: string): MetadataResult {
+  const lineCounter = new LineCounter();
+  const document: Document = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
+  const valueAt = (path: readonly (string | number)[]): Position => valuePosition(document, lineCounter, path);
+  const diagnostics: Diagnostic[] = [];
+
+  for (const problem of [...document.errors, ...document.warnings]) {
+    const { line, col } = lineCounter.linePos(problem.pos[0]);
+    const isError = problem.name === 'YAMLParseError';
+    const make = isError ? error : warning;
+    let message = yamlMessage(problem.message);
+    if (problem.code === 'DUPLICATE_KEY') {
+      const key = /^\s*([^:#]+?)\s*:/.exec(text.slice(problem.pos[0]))?.[1];
+      if (key !== undefined) message = `key '${key}' appears twice in the same block`;
+    }
+    diagnostics.push(make(displayPath, { line, column: col }, `YAML ${isError ? 'syntax error' : 'warning'}: ${message}`));
+  }
+  if (document.errors.length > 0) return { meta: undefined, dataColumns: undefined, diagnostics, valueAt };
+
+  const placeholder = text.split(/\r\n|\n|\r/).findIndex((line) => /\bTODO\b/.test(line.replace(/#.*$/, '')));
+  if (placeholder >= 0) {
+    diagnostics.push(warning(displayPath, { line: placeholder + 1 }, 'metadata still holds a TODO placeholder', 'replace every TODO value before review'));
+  }
+
+  const raw: unknown = document.toJS();
+  if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) {
+    diagnostics.push(
+      error(displayPath, { line: 1, column: 1 }, 'metadata must be a block of keys such as title, property, variable', "run 'correlary new <slug>' for a commented template"),
+    );
+    return { meta: undefined, dataColumns: undefined, diagnostics, valueAt };
+  }
+
+  const parsed = correlationMetaSchema.safeParse(raw);
+  if (parsed.success) return { meta: parsed.data, dataColumns: parsed.data.data, diagnostics, valueAt };
+
+  const problems = parsed.error.issues.flatMap((issue) => issueToProblems(correlationMetaSchema, issue));
+  // A misspelt required key gives "unknown key 'nam'" and "missing required key 'name'": keep only the first.
+  const typoTargets = new Set(problems.filter((problem) => problem.typoOf !== undefined).map((problem) => problem.typoOf));
+  for (const problem of problems) {
+    if (problem.missing !== undefined && typoTargets.has(problem.missing)) continue;
+    const position = problem.atKey ? keyPosition(document, lineCounter, problem.path) : valueAt(problem.path);
+    diagnostics.push(error(displayPath, position, problem.message, problem.hint));
+  }
+  const dataBlock = dataColumnsSchema.safeParse((raw as Record<string, unknown>)['data']);
+  return { meta: undefined, dataColumns: dataBlock.success ? dataBlock.data : undefined, diagnostics, valueAt };
+}

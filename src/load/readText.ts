@@ -1,0 +1,32 @@
+/**
+ * Read a user's text file without changing it: size limit first, then UTF-8 decoding with the BOM removed.
+ * A BOM and CRLF line ends are accepted as they are; nothing is ever written back.
+ */
+import { readFile, stat } from 'node:fs/promises';
+import { error, type Diagnostic } from './diagnostic.ts';
+import { formatBytes } from './limits.ts';
+
+export type ReadTextResult = { ok: true; text: string } | { ok: false; diagnostic: Diagnostic };
+
+/**
+ * Read `absolutePath` as UTF-8 text when it is at most `limitBytes` long; `displayPath` names it in messages.
+ */
+export async function readText(absolutePath: string, displayPath: string, limitBytes: number): Promise<ReadTextResult> {
+  const info = await stat(absolutePath);
+  if (!info.isFile()) {
+    return { ok: false, diagnostic: error(displayPath, { line: 0 }, 'is not a regular file') };
+  }
+  if (info.size > limitBytes) {
+    return {
+      ok: false,
+      diagnostic: error(
+        displayPath,
+        { line: 0 },
+        `file is ${formatBytes(info.size)}, over the ${formatBytes(limitBytes)} limit`,
+        'split the data or thin it before adding it to the handbook',
+      ),
+    };
+  }
+  const text = await readFile(absolutePath, 'utf8');
+  return { ok: true, text: text.charCodeAt(0) === 0xfeff ? text.slice(1) : text };
+}

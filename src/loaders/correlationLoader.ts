@@ -1,0 +1,85 @@
+/**
+ * Astro content loader for the handbook: a small adapter over src/load (read + validate) and the core (fit).
+ * Astro 5's glob() loader cannot read CSV, so this is a custom object loader
+ * (Content Loader API, astro@5 dist/content/loaders/types.d.ts: store, parseData, generateDigest, logger, watcher).
+ *
+ * Any error in any folder fails the build with every message logged; warnings are logged and kept in the entry
+ * so that the page can show them.
+ */
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { Loader, LoaderContext } from 'astro/loaders';
+import { fitDataset, formatDiagnostic, readHandbook, sortDiagnostics, type Diagnostic } from '../load/index.ts';
+import type { CorrelationEntry } from '../schema/index.ts';
+
+export interface CorrelationLoaderOptions {
+  /** Content directory, relative to the project root. Defaults to `content`. */
+  readonly directory?: string;
+}
+
+/** Read, validate and fit every correlation, then replace the collection's entries. */
+async function loadAll(context: LoaderContext, absoluteDirectory: string): Promise<void> {
+  const displayDirectory = path.relative(process.cwd(), absoluteDirectory) || '.';
+  const handbook = await readHandbook(displayDirectory);
+  const problems: Diagnostic[] = [...handbook.diagnostics];
+  const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
+  for (const dataset of handbook.datasets) {
+    problems.push(...dataset.diagnostics);
+    const correlation = dataset.correlation;
+    if (correlation === undefined) continue;
+    const fitted = fitDataset(correlation);
+    problems.push(...fitted.diagnostics);
+    const entry: CorrelationEntry = {
+      slug: correlation.slug,
+      meta: correlation.meta,
+      points: [...correlation.points],
+      excluded: [...correlation.excluded],
+      dataRange: correlation.dataRange,
+      range: correlation.range,
+      warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
+      fit: (fitted.fit as unknown as Record<string, unknown> | undefined) ?? null,
+      orderSelection: (fitted.selection as unknown as Record<string, unknown> | undefined) ?? null,
+    };
+    entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(correlation.metadataPath)) });
+  }
+
+  const sorted = sortDiagnostics(problems);
+  for (const problem of sorted) {
+    if (problem.severity === 'warning') context.logger.warn(formatDiagnostic(problem));
+    else context.logger.error(formatDiagnostic(problem));
+  }
+  const errors = sorted.filter((problem) => problem.severity === 'error').length;
+  if (errors > 0) {
+    throw new Error(`${errors} problem${errors === 1 ? '' : 's'} in ${displayDirectory}; run 'npx correlary check ${displayDirectory}' for the list`);
+  }
+
+  context.store.clear();
+  for (const { entry, filePath } of entries) {
+    const id = String(entry['slug']);
+    const data = await context.parseData({ id, data: entry, filePath });
+    context.store.set({ id, data, digest: context.generateDigest(data), filePath });
+  }
+  context.logger.info(`loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory}`);
+}
+
+/**
+ * The handbook's loader: `defineCollection({ loader: correlationLoader(), schema: correlationEntrySchema })`.
+ * In `astro dev`, a change to any file under the content directory reloads the whole collection.
+ */
+export function correlationLoader(options: CorrelationLoaderOptions = {}): Loader {
+  const directory = options.directory ?? 'content';
+  return {
+    name: 'correlary-correlations',
+    load: async (context) => {
+      const absoluteDirectory = fileURLToPath(new URL(directory.endsWith('/') ? directory : `${directory}/`, context.config.root));
+      await loadAll(context, absoluteDirectory);
+      context.watcher?.add(absoluteDirectory);
+      context.watcher?.on('all', (_event, changed) => {
+        if (!changed.startsWith(absoluteDirectory)) return;
+        loadAll(context, absoluteDirectory).catch((caught: unknown) => {
+          context.logger.error(caught instanceof Error ? caught.message : String(caught));
+        });
+      });
+    },
+  };
+}

@@ -1,0 +1,66 @@
+/**
+ * One stored entry of the `correlations` collection: validated metadata, the points with their file lines,
+ * the validity range, the warnings kept for the page, and the fit (plain data produced by the core).
+ */
+import { z } from 'zod';
+import { correlationMetaSchema } from './correlationMeta.ts';
+
+/** One data row as read from the CSV. */
+export const dataPointSchema = z
+  .object({
+    /** Data row number, 1 = first row after the header. */
+    row: z.number().int().positive().describe('Data row number, 1 = first row after the header'),
+    /** Line of the row in the data file, 1-based. */
+    line: z.number().int().positive().describe('Line in the data file'),
+    x: z.number().finite().describe('x value'),
+    y: z.number().finite().describe('y value'),
+    /** Standard uncertainty of y, when the file has an uncertainty column. */
+    uncertainty: z.number().positive().optional().describe('Standard uncertainty of y'),
+    /** Free-text note from the note column. */
+    note: z.string().optional().describe('Note from the data file'),
+  })
+  .strict();
+
+/** A point left out of the fit, with the reason from the metadata. */
+export const excludedPointSchema = dataPointSchema.extend({
+  reason: z.string().describe('Why the point is left out'),
+});
+
+/** A message kept with a loaded correlation so that the page can show it. */
+export const diagnosticSchema = z
+  .object({
+    severity: z.enum(['error', 'warning']).describe('error stops the build; warning is shown on the page'),
+    file: z.string().describe('Path of the file, as given to the loader'),
+    line: z.number().int().nonnegative().describe('1-based line; 0 when no line applies'),
+    column: z.number().int().positive().optional().describe('1-based column, where it applies'),
+    message: z.string().describe('The problem'),
+    hint: z.string().optional().describe('How to fix it'),
+  })
+  .strict();
+
+/** The stored entry. */
+export const correlationEntrySchema = z
+  .object({
+    slug: z.string().describe('URL slug'),
+    meta: correlationMetaSchema,
+    /** Every data row, in file order. */
+    points: z.array(dataPointSchema).describe('Every data row, in file order'),
+    /** Rows left out of the fit. */
+    excluded: z.array(excludedPointSchema).describe('Rows left out of the fit'),
+    /** x range of the points used in the fit. */
+    dataRange: z.object({ min: z.number(), max: z.number() }).strict().describe('x range of the points used'),
+    /** Published validity range: the data range, or narrower if the metadata says so. */
+    range: z.object({ min: z.number(), max: z.number() }).strict().describe('Published validity range'),
+    /** Warnings found while reading and fitting. */
+    warnings: z.array(diagnosticSchema).describe('Warnings found while reading and fitting'),
+    /** The fit as plain data from the numerical core, or null when fitting failed. */
+    fit: z.record(z.unknown()).nullable().describe('PolynomialFit from the core, as plain data'),
+    /** Order-selection summary when the order was chosen automatically, else null. */
+    orderSelection: z.record(z.unknown()).nullable().describe('Order-selection result, as plain data'),
+  })
+  .strict();
+
+export type DataPoint = z.output<typeof dataPointSchema>;
+export type ExcludedPoint = z.output<typeof excludedPointSchema>;
+export type Diagnostic = z.output<typeof diagnosticSchema>;
+export type CorrelationEntry = z.output<typeof correlationEntrySchema>;

@@ -1,0 +1,39 @@
+/**
+ * Handbook source format: zod schemas only. Imports nothing but zod, so both the CLI and the Astro loader use it.
+ */
+
+// metadata file
+export { correlationMetaSchema, statedUncertaintySchema, METADATA_FILE, SLUG_PATTERN } from './correlationMeta.ts';
+export type { CorrelationMeta, CorrelationMetaInput } from './correlationMeta.ts';
+
+// building blocks
+export { quantitySchema } from './quantity.ts';
+export type { Quantity } from './quantity.ts';
+export { materialSchema } from './material.ts';
+export type { Material } from './material.ts';
+export { sourceSchema, sourceMethodSchema, isoDateSchema } from './source.ts';
+export type { Source } from './source.ts';
+export { reviewSchema, reviewStatusSchema } from './review.ts';
+export type { Review } from './review.ts';
+export { dataColumnsSchema } from './dataColumns.ts';
+export type { DataColumns } from './dataColumns.ts';
+export {
+  fitOptionsSchema,
+  passThroughSchema,
+  exclusionSchema,
+  rangeSchema,
+  transformSchema,
+  criterionSchema,
+  CRITERIA,
+  ORDER_LIMIT,
+} from './fitOptions.ts';
+export type { FitSettings, FitOptionsInput, PassThrough, Exclusion } from './fitOptions.ts';
+
+// loaded entry
+export {
+  correlationEntrySchema,
+  dataPointSchema,
+  excludedPointSchema,
+  diagnosticSchema,
+} from './correlationEntry.ts';
+export type { CorrelationEntry, DataPoint, ExcludedPoint, Diagnostic } from './correlationEntry.ts';
