@@ -15,7 +15,7 @@
  * @example fitPolynomial({ x: [0, 1, 2, 3], y: [1, 3, 5, 7] }, { order: 1 }).coefficients // => [1, 2]
  * @throws FitError when the data cannot support the requested fit (too few distinct x, rank deficiency, …)
  */
-import { Matrix, SingularValueDecomposition } from 'ml-matrix';
+import { Matrix } from 'ml-matrix';
 import { domainMap, toUnit } from './domain.ts';
 import { mappedCovarianceToPower, mappedToPower } from './convertBasis.ts';
 import { chiSquareUpperP, tQuantile } from './distributions.ts';
@@ -23,7 +23,7 @@ import { evaluateFit } from './evaluate.ts';
 import { exactLeastSquares } from './exact/exactLeastSquares.ts';
 import { FitError } from './fitError.ts';
 import { significantDigits } from './format/significantDigits.ts';
-import { solveLeastSquares } from './leastSquares.ts';
+import { conditionNumber, solveLeastSquares } from './leastSquares.ts';
 import { lackOfFit } from './stats/lackOfFit.ts';
 import { residualStatistics, totalSumOfSquares } from './stats/residualStatistics.ts';
 import { runsTest } from './stats/runsTest.ts';
@@ -35,10 +35,6 @@ function design(values: readonly number[], powers: readonly number[], rowScale?:
   return new Matrix(values.map((value, i) => powers.map((k) => value ** k * (rowScale ? rowScale[i]! : 1))));
 }
 
-function condition(matrix: Matrix): number {
-  if (matrix.columns === 0) return 1;
-  return new SingularValueDecomposition(matrix, { autoTranspose: true, computeLeftSingularVectors: false, computeRightSingularVectors: false }).condition;
-}
 
 export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit {
   const { order, intercept, transformX, transformY, constraints, confidence } = validateFitInput(data, options);
@@ -183,8 +179,8 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       looRmse: summary.looRmse,
       aicc: summary.aicc,
       bic: summary.bic,
-      conditionRaw: condition(design(u, powers, rootWeights)),
-      conditionMapped: condition(A),
+      conditionRaw: conditionNumber(design(u, powers, rootWeights)),
+      conditionMapped: conditionNumber(A),
       reducedChiSquare: weighted && dof > 0 ? summary.residualSumOfSquares / dof : null,
       chiSquareP: weighted && dof > 0 ? chiSquareUpperP(summary.residualSumOfSquares, dof) : null,
     },

@@ -6,7 +6,9 @@
  *   basis Z of its null space and a particular solution β₀; the free problem is min ‖(A·Z)·z − (b − A·β₀)‖.
  * - Columns are scaled to unit 2-norm before factoring (equilibration), and unscaled afterwards.
  * - ml-matrix's `isFullRank` is an exact-zero test, so rank is judged from the singular values of the scaled
- *   matrix with the tolerance max(n, p)·ε·σ₁ (the usual numerical-rank rule).
+ *   matrix with the tolerance max(n, p)·ε·σ₁ (the usual numerical-rank rule). A = Q·R with Q orthonormal, so the
+ *   singular values of A are those of the small p×p factor R: the SVD is taken of R (cheap for long tables), and
+ *   its right singular vectors V give (AᵀA)⁻¹ = V·Σ⁻²·Vᵀ for the covariance.
  * - One step of iterative refinement in double precision polishes the QR solution.
  *
  * References: Å. Björck, Numerical Methods for Least Squares Problems, SIAM 1996 (§2.4 QR, §5.1 null-space method);
@@ -60,6 +62,13 @@ function constraintBasis(C: Matrix, d: readonly number[]): { Z: Matrix; particul
   return { Z, particular };
 }
 
+/** 2-norm condition number of a tall matrix, from the singular values of its R factor. */
+export function conditionNumber(matrix: Matrix): number {
+  if (matrix.columns === 0) return 1;
+  const R = new QrDecomposition(matrix).upperTriangularMatrix;
+  return new SingularValueDecomposition(R, { computeLeftSingularVectors: false, computeRightSingularVectors: false }).condition;
+}
+
 /** Solve the (constrained) least-squares problem. Inputs are not modified. */
 export function solveLeastSquares(
   A: Matrix,
@@ -83,7 +92,8 @@ export function solveLeastSquares(
 
   const norms = columnNorms(free);
   const scaled = free.clone().divRowVector(norms);
-  const svd = new SingularValueDecomposition(scaled, { autoTranspose: true });
+  const qr = new QrDecomposition(scaled);
+  const svd = new SingularValueDecomposition(qr.upperTriangularMatrix, { computeLeftSingularVectors: false });
   const singular = svd.diagonal;
   const largest = singular[0] ?? 0;
   const tolerance = Math.max(n, k) * Number.EPSILON * largest;
@@ -96,7 +106,6 @@ export function solveLeastSquares(
   let leverage: number[] = new Array(n).fill(0);
   let unscaledZ: number[][] = [];
   if (k > 0) {
-    const qr = new QrDecomposition(scaled);
     const rhs = Matrix.columnVector(target);
     let solution = qr.solve(rhs);
     // One step of iterative refinement: r = b − A·z, z ← z + QR⁻¹·r.
