@@ -22,9 +22,9 @@ const replicates = replicatesArg ? Number(replicatesArg.split('=')[1]) : quick ?
 if (!(Number.isInteger(replicates) && replicates > 0)) throw new Error(`bench:order requires a positive integer --replicates, got ${replicatesArg}`);
 
 const criteria = criteriaUnderTest(explore);
-const criteriaOnly = criteria.map((named) => named.criterion);
+const criteriaOnly = criteria.flatMap((named) => (named.criterion ? [named.criterion] : []));
 /** outcomes[criterion][`${family}|${n}`] */
-const outcomes: Map<string, Outcome[]>[] = criteria.map(() => new Map());
+const outcomes: Map<string, Outcome[]>[] = [...criteria, null, null].map(() => new Map());
 let flatCount = 0;
 let total = 0;
 const started = Date.now();
@@ -43,7 +43,8 @@ for (const cell of allCells()) {
     if (evaluation.flat) flatCount++;
     const target = targetFor(cell, evaluation.oracleOrder);
     const reference = cell.degree !== null ? evaluation.oosRmse[cell.degree]! : evaluation.oosRmse[evaluation.oracleOrder]!;
-    evaluation.chosen.forEach((order, index) => {
+    const picks = [...evaluation.chosen, evaluation.oracleOrder, evaluation.guardedOracleOrder];
+    picks.forEach((order, index) => {
       if (order < 0) return;
       const chosenRmse = evaluation.oosRmse[order]!;
       const ratioValue = reference > 0 ? chosenRmse / reference : chosenRmse === 0 ? 1 : Infinity;
@@ -58,4 +59,4 @@ for (const cell of allCells()) {
 const seconds = (Date.now() - started) / 1000;
 console.log(`# Order-selection benchmark\n`);
 console.log(`${total} data sets, ${replicates} replicates per cell, ${criteria.length} criteria; ${seconds.toFixed(1)} s on this machine (informational). Flat-data test fired on ${flatCount} data sets.\n`);
-report(criteria, outcomes, SAMPLE_SIZES as readonly number[], ['A', 'B', 'C1', 'C2'] satisfies Family[]);
+report([...criteria, { label: 'x oracle (best OOS order)', criterion: null, isDefault: false }, { label: 'x oracle, ≥2 residual dof', criterion: null, isDefault: false }], outcomes, SAMPLE_SIZES as readonly number[], ['A', 'B', 'C1', 'C2'] satisfies Family[]);

@@ -22,6 +22,8 @@ export interface Evaluation {
   readonly oosRmse: readonly number[];
   /** Lowest OOS RMSE order among 1..M (ties within 1e-9 relative go low). */
   readonly oracleOrder: number;
+  /** The same among orders keeping at least 2 residual degrees of freedom. */
+  readonly guardedOracleOrder: number;
   /** Chosen order per criterion, in the order of the criteria list. */
   readonly chosen: readonly number[];
   readonly flat: boolean;
@@ -73,6 +75,11 @@ export function evaluateDataSet(data: DataSet, criteria: readonly OrderCriterion
     if (oosRmse[order]! < oosRmse[oracleOrder]! * (1 - 1e-9)) oracleOrder = order;
   }
 
+  let guardedOracleOrder = 1;
+  for (let order = 2; order <= Math.min(maxCandidate, n - 3); order++) {
+    if (oosRmse[order]! < oosRmse[guardedOracleOrder]! * (1 - 1e-9)) guardedOracleOrder = order;
+  }
+
   const flat = isFlat(table);
   const chiTable = data.sigma !== null && data.sigma > 0 ? chiSquareTable(table, data.sigma) : null;
   const chosen = criteria.map((criterion) => {
@@ -80,5 +87,5 @@ export function evaluateDataSet(data: DataSet, criteria: readonly OrderCriterion
     if (criterion.requiresUncertainty) return chiTable ? criterion.choose(chiTable) : -1;
     return criterion.choose(table);
   });
-  return { maxCandidate, oosRmse, oracleOrder, chosen, flat };
+  return { maxCandidate, oosRmse, oracleOrder, guardedOracleOrder, chosen, flat };
 }

@@ -62,9 +62,10 @@ export function pct(value: number): string {
   return Number.isNaN(value) ? '–' : value.toFixed(1);
 }
 
-/** Format a ratio with 3 significant digits. */
+/** Format a ratio: 3 decimals below 10 (targets such as 1.10 need the third), 3 significant digits above. */
 export function ratio(value: number): string {
-  return Number.isNaN(value) ? '–' : String(Number(value.toPrecision(3)));
+  if (Number.isNaN(value)) return '–';
+  return value < 10 ? value.toFixed(3) : String(Number(value.toPrecision(3)));
 }
 
 /** A markdown table. */

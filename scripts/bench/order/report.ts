@@ -89,7 +89,7 @@ export function report(criteria: readonly NamedCriterion[], outcomes: Outcomes, 
     return `${pct(s.exact)} / ${pct(s.under)}`;
   }), (() => { const s = summarise(pooled(outcomes[index]!, 'A1', sizes)); return `${pct(s.exact)} / ${pct(s.under)}`; })()])));
 
-  const chiIndex = criteria.findIndex((named) => named.criterion.requiresUncertainty);
+  const chiIndex = criteria.findIndex((named) => named.criterion?.requiresUncertainty);
   if (chiIndex >= 0) {
     const bucket = outcomes[chiIndex]!;
     console.log('\n## χ² mode (σ stated: true σ for A and B, RMS rounding σ for C1 and C2)\n');

@@ -32,7 +32,7 @@ import { extraSumOfSquaresF, extraSumOfSquaresP, isSignificant } from './extraSu
 export interface LowestJustifiedParameters {
   /** Familywise significance level of "order m is enough" (split over the higher orders compared). */
   readonly alpha: number;
-  /** Split α over the comparisons (Bonferroni) or use α for each comparison. */
+  /** How α is shared over the K higher orders compared: 'bonferroni' tests each at α/K, 'none' each at α. */
   readonly multiplicity: 'bonferroni' | 'none';
   /** A higher order k also counts as an improvement when LOO RMSE(k)·(1 + τ) < LOO RMSE(m); null: off. */
   readonly looTolerance: number | null;
@@ -46,7 +46,7 @@ export interface LowestJustifiedParameters {
 export const LOWEST_JUSTIFIED_DEFAULTS: LowestJustifiedParameters = {
   alpha: 0.1,
   multiplicity: 'bonferroni',
-  looTolerance: 0.1,
+  looTolerance: 0.15,
   looConfirmAlpha: 0.05,
   minResidualDof: 2,
 };
