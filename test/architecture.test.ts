@@ -1,0 +1,47 @@
+/**
+ * Layering rules (DEVELOPERS.md): the numerical core is pure (no Astro, no Node built-ins, no DOM, no file I/O)
+ * and the schemas import only zod. A file that breaks the rule fails here with its import named.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+
+function sourceFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const path = join(dir, name);
+    return statSync(path).isDirectory() ? sourceFiles(path) : /\.(ts|mts|js)$/.test(name) ? [path] : [];
+  });
+}
+
+function importsOf(file: string): string[] {
+  const text = readFileSync(file, 'utf8');
+  return [...text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)].map((m) => (m[1] ?? m[2])!);
+}
+
+const DOM_GLOBALS = /\b(document|window|navigator|localStorage|HTMLElement)\s*[.[]/;
+
+describe('architecture', () => {
+  it('src/core imports only relative modules, ml-matrix and @stdlib, and touches no DOM global', () => {
+    const offenders: string[] = [];
+    for (const file of sourceFiles(join(root, 'src/core'))) {
+      for (const spec of importsOf(file)) {
+        if (!(spec.startsWith('.') || spec === 'ml-matrix' || spec.startsWith('@stdlib/'))) offenders.push(`${relative(root, file)} imports ${spec}`);
+      }
+      if (DOM_GLOBALS.test(readFileSync(file, 'utf8'))) offenders.push(`${relative(root, file)} uses a DOM global`);
+    }
+    expect(offenders).toEqual([]);
+  });
+
+  it('src/schema imports only zod and its own files', () => {
+    const offenders: string[] = [];
+    for (const file of sourceFiles(join(root, 'src/schema'))) {
+      for (const spec of importsOf(file)) {
+        if (!(spec.startsWith('.') || spec === 'zod')) offenders.push(`${relative(root, file)} imports ${spec}`);
+      }
+    }
+    expect(offenders).toEqual([]);
+  });
+});
