@@ -17,7 +17,9 @@ function short(value: number): string {
 
 /** One summary line: slug, points used, chosen order, residual standard deviation and R². */
 function summaryLine(slug: string, fit: PolynomialFit, criterion: string, unit: string): string {
-  const s = fit.transformY === 'log' ? `${short(fit.statistics.residualStdDev)} (in ln y)` : `${short(fit.statistics.residualStdDev)} ${unit}`;
+  const residual = short(fit.statistics.residualStdDev);
+  // Weighted residuals are divided by each point's uncertainty, so s is a pure number (1 = scatter as stated).
+  const s = fit.weighted ? `${residual} (weighted, 1 = scatter as stated)` : fit.transformY === 'log' ? `${residual} (in ln y)` : `${residual} ${unit}`;
   const r2 = fit.statistics.rSquared;
   return `${slug}: n = ${fit.statistics.n}, order ${fit.order} (${criterion}), s = ${s}, R² = ${Number.isFinite(r2) ? r2.toFixed(6) : String(r2)}`;
 }

@@ -22,7 +22,7 @@ export async function readText(absolutePath: string, displayPath: string, limitB
       diagnostic: error(
         displayPath,
         { line: 0 },
-        `file is ${formatBytes(info.size)}, over the ${formatBytes(limitBytes)} limit`,
+        `file is ${info.size} bytes, over the ${formatBytes(limitBytes)} limit`,
         'split the data or thin it before adding it to the handbook',
       ),
     };
