@@ -22,6 +22,7 @@ import { chiSquareUpperP, tQuantile } from './distributions.ts';
 import { evaluateFit } from './evaluate.ts';
 import { exactLeastSquares } from './exact/exactLeastSquares.ts';
 import { FitError } from './fitError.ts';
+import { roundSignificant } from './format/roundSignificant.ts';
 import { significantDigits } from './format/significantDigits.ts';
 import { conditionNumber, solveLeastSquares } from './leastSquares.ts';
 import { lackOfFit } from './stats/lackOfFit.ts';
@@ -133,8 +134,11 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
 
   const range = { min: Math.min(...data.x), max: Math.max(...data.x) };
   const partial = { transformX, transformY, mapped: { map, coefficients: mappedCoefficients, covariance: mappedCovariance }, range, order };
+  // Seven check points: both range ends exactly, interior points rounded to a short decimal (easy to type).
+  const span = range.max - range.min;
+  const unit = 10 ** (Math.floor(Math.log10(span)) - 2);
   const checkValues = Array.from({ length: 7 }, (_, i) => {
-    const x = i === 6 ? range.max : range.min + ((range.max - range.min) * i) / 6;
+    const x = i === 0 ? range.min : i === 6 ? range.max : roundSignificant(Math.round((range.min + (span * i) / 6) / unit) * unit, 15);
     return { x, y: evaluateFit(partial, x).y };
   });
   const meanSquareSigma = sigmaV ? sigmaV.reduce((sum, s) => sum + s * s, 0) / n : 1;
