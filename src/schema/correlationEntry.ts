@@ -38,6 +38,14 @@ export const diagnosticSchema = z
   })
   .strict();
 
+/** A closed interval of x, in the variable's unit. */
+const intervalSchema = z
+  .object({
+    min: z.number().describe('Lowest x'),
+    max: z.number().describe('Highest x'),
+  })
+  .strict();
+
 /** The stored entry. */
 export const correlationEntrySchema = z
   .object({
@@ -48,9 +56,9 @@ export const correlationEntrySchema = z
     /** Rows left out of the fit. */
     excluded: z.array(excludedPointSchema).describe('Rows left out of the fit'),
     /** x range of the points used in the fit. */
-    dataRange: z.object({ min: z.number(), max: z.number() }).strict().describe('x range of the points used'),
+    dataRange: intervalSchema.describe('x range of the points used'),
     /** Published validity range: the data range, or narrower if the metadata says so. */
-    range: z.object({ min: z.number(), max: z.number() }).strict().describe('Published validity range'),
+    range: intervalSchema.describe('Published validity range'),
     /** Warnings found while reading and fitting. */
     warnings: z.array(diagnosticSchema).describe('Warnings found while reading and fitting'),
     /** The fit as plain data from the numerical core, or null when fitting failed. */

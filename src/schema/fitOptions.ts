@@ -103,7 +103,7 @@ export const fitOptionsSchema = z
     /** Fit a constant term. Defaults to true. */
     intercept: z.boolean().default(true).describe('Fit a constant term'),
     /** Transforms of x and y. Defaults to identity for both. */
-    transform: transformSchema.default({}),
+    transform: transformSchema.default({}).describe('Transforms of x and y before fitting'),
     /** `none` (default) or `uncertainty`: weights w = 1/σ² from the data's uncertainty column. */
     weights: z.enum(['none', 'uncertainty']).default('none').describe('Where weights come from'),
     /** Points the curve must pass through. Defaults to none. */
