@@ -3,7 +3,7 @@
  * value comes from.
  */
 import { describe, expect, it } from 'vitest';
-import { bands, evaluateFit, FitError, fitPolynomial } from '../../src/core/index.ts';
+import { bands, evaluateFit, FitError, fitOrders, fitPolynomial } from '../../src/core/index.ts';
 
 const freeze = <T>(values: T[]): readonly T[] => Object.freeze(values);
 const relative = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
@@ -187,5 +187,20 @@ describe('fitPolynomial refusals and the range guard', () => {
     expect(() => evaluateFit(fit, 650)).toThrowError(/outside the fitted range \[300, 600\]/);
     expect(evaluateFit(fit, 650, { extrapolate: true }).extrapolated).toBe(true);
     expect(evaluateFit(fit, 450).extrapolated).toBe(false);
+  });
+});
+
+describe('fitOrders', () => {
+  it('fitOrders returns one full fit per order and keeps refusals with their reason', () => {
+    const x = freeze([300, 350, 400, 450, 500]);
+    const y = freeze([1.2, 1.9, 2.3, 2.6, 2.7]);
+    const fits = fitOrders({ x, y }, [1, 2, 5], { exactFor: [2] });
+    expect(fits.map((entry) => entry.order)).toEqual([1, 2, 5]);
+    expect(fits[0]!.fit?.method.refinement).toBe('none');
+    expect(fits[1]!.fit?.method.refinement).toBe('exact-rational');
+    expect(fits[2]!.fit).toBeNull();
+    expect(fits[2]!.refused?.message).toMatch(/order 5 needs at least 6 points, the data have 5/);
+    // JSON round trip keeps everything a page needs (NaN becomes null, which pages treat as "not defined").
+    expect(JSON.parse(JSON.stringify(fits[1]!.fit)).coefficients).toEqual(fits[1]!.fit!.coefficients);
   });
 });
