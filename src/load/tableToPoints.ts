@@ -39,8 +39,8 @@ function numericCell(cell: CsvCell | undefined, columnName: string, file: string
 
 /**
  * Check the header and every row, and build points when the declared columns are known and valid.
- * @param columns the metadata's data block, or undefined when it could not be read (then every column is
- *   checked as numeric, so number problems are still reported)
+ * @param columns the metadata's data block, or undefined when it could not be read (then the first two columns
+ *   are checked as numeric, so number problems are still reported)
  */
 export function tableToPoints(table: CsvTable, columns: DataColumns | undefined, file: string): PointsResult {
   const diagnostics: Diagnostic[] = [];
@@ -60,7 +60,8 @@ export function tableToPoints(table: CsvTable, columns: DataColumns | undefined,
 
   const roles = new Map<number, { role: Role; name: string }>();
   if (columns === undefined) {
-    headerNames.forEach((name, index) => roles.set(index, { role: 'y', name }));
+    // The metadata could not say which columns hold what: check the first two, which are x and y by convention.
+    headerNames.slice(0, 2).forEach((name, index) => roles.set(index, { role: 'y', name }));
   } else {
     const declared: [Role, string | undefined][] = [
       ['x', columns.x],
