@@ -70,7 +70,9 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
   // A fixed order must leave at least one residual degree of freedom and needs order + 1 distinct x values.
   if (typeof fit.order === 'number' && used.length >= MINIMUM_POINTS) {
     const coefficients = (fit.intercept ? fit.order + 1 : fit.order) - fit.passThrough.length;
-    if (used.length <= coefficients) {
+    if (coefficients < 1) {
+      diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} leaves no free coefficient after ${fit.passThrough.length} pass-through points`));
+    } else if (used.length <= coefficients) {
       diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} needs at least ${coefficients + 1} points, but ${used.length} are used`));
     } else if (distinctX <= fit.order) {
       diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} needs at least ${fit.order + 1} different x values, but the data have ${distinctX}`));

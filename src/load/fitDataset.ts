@@ -51,14 +51,31 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
       ...(fitSettings.criterion === undefined ? {} : { criterion: fitSettings.criterion }),
       ...(typeof fitSettings.order === 'number' ? { fixedOrder: fitSettings.order, reason: fitSettings.reason ?? '' } : {}),
     });
+    // The order selector does not see pass-through points; an order they would pin down completely is refused.
+    const free = (fitSettings.intercept ? selection.order + 1 : selection.order) - fitSettings.passThrough.length;
+    if (free < 1) {
+      diagnostics.push(
+        error(
+          correlation.metadataPath,
+          correlation.orderPosition,
+          `order ${selection.order} (${selection.criterion}) leaves no free coefficient after ${fitSettings.passThrough.length} pass-through points`,
+          'fix the order with fit.order and fit.reason, or use fewer pass-through points',
+        ),
+      );
+      return { fit: undefined, selection, diagnostics };
+    }
     fit = fitPolynomial(data, {
       ...common,
       order: selection.order,
       constraints: fitSettings.passThrough.map((point) => ({ x: point.x, y: point.y })),
     });
   } catch (caught) {
-    if (!(caught instanceof FitError)) throw caught;
-    diagnostics.push(fitErrorDiagnostic(correlation, caught));
+    if (caught instanceof FitError) diagnostics.push(fitErrorDiagnostic(correlation, caught));
+    else {
+      // Not the data's fault: say so, and let the other correlations be checked.
+      const message = caught instanceof Error ? caught.message : String(caught);
+      diagnostics.push(error(correlation.metadataPath, correlation.orderPosition, `internal error while fitting: ${message}`));
+    }
   }
   const coreWarnings = [...(selection?.warnings ?? []), ...(fit?.warnings ?? [])];
   for (const text of coreWarnings) {

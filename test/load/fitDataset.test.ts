@@ -46,4 +46,13 @@ describe('fitDataset(correlation)', () => {
       `${FOLDER}/correlation.yaml:2:1: cannot fit: selectOrder requires per-point uncertainties for the chiSquare criterion`,
     ]);
   });
+
+  it('fitDataset refuses an automatic order that the pass-through points fix completely', async () => {
+    const folder = 'test/fixtures/content/constraints-fix-all/liquid-a';
+    const loaded = await readDataset(folder);
+    expect(loaded.diagnostics).toEqual([]);
+    expect(fitDataset(loaded.correlation!).diagnostics.map(formatDiagnostic)).toEqual([
+      `${folder}/correlation.yaml:24:3: order 1 (lowestJustified) leaves no free coefficient after 2 pass-through points; fix the order with fit.order and fit.reason, or use fewer pass-through points`,
+    ]);
+  });
 });

@@ -113,6 +113,12 @@ const CASES: [string, string[]][] = [
   ['yaml-syntax', [
     "liquid-a/correlation.yaml:11:3: YAML syntax error: key 'symbol' appears twice in the same block",
   ]],
+  ['order-too-high', [
+    "liquid-a/correlation.yaml:24:10: order 9 needs at least 11 points, but 8 are used",
+  ]],
+  ['reciprocal-zero', [
+    "liquid-a/data.csv:2:1: x = 0 has no reciprocal, but fit.transform.x is 'reciprocal'; leave the row out with fit.exclude, or choose another transform",
+  ]],
 ];
 
 describe('readHandbook(fixture) reports each problem with file, line and column', () => {
