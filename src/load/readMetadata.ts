@@ -47,9 +47,16 @@ export function readMetadata(text: string, displayPath: string): MetadataResult 
   }
   if (document.errors.length > 0) return { meta: undefined, dataColumns: undefined, diagnostics, valueAt };
 
-  const placeholder = text.split(/\r\n|\n|\r/).findIndex((line) => /\bTODO\b/.test(line.replace(/#.*$/, '')));
-  if (placeholder >= 0) {
-    diagnostics.push(warning(displayPath, { line: placeholder + 1 }, 'metadata still holds a TODO placeholder', 'replace every TODO value before review'));
+  // Template placeholders must not reach a published page: the first one is an error, the count says how many.
+  const placeholderLines = text
+    .split(/\r\n|\n|\r/)
+    .map((line, index) => (/\bTODO\b/.test(line.replace(/#.*$/, '')) ? index + 1 : 0))
+    .filter((line) => line > 0);
+  if (placeholderLines.length > 0) {
+    const count = placeholderLines.length;
+    diagnostics.push(
+      error(displayPath, { line: placeholderLines[0]! }, `metadata still holds ${count} TODO placeholder${count === 1 ? '' : 's'}, the first on this line`, 'replace every TODO value'),
+    );
   }
 
   const raw: unknown = document.toJS();

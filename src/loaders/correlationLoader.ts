@@ -62,6 +62,9 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   context.logger.info(`loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory}`);
 }
 
+/** Watchers already subscribed, so that a repeated load in `astro dev` does not add a second listener. */
+const watched = new WeakSet<object>();
+
 /**
  * The handbook's loader: `defineCollection({ loader: correlationLoader(), schema: correlationEntrySchema })`.
  * In `astro dev`, a change to any file under the content directory reloads the whole collection.
@@ -73,8 +76,11 @@ export function correlationLoader(options: CorrelationLoaderOptions = {}): Loade
     load: async (context) => {
       const absoluteDirectory = fileURLToPath(new URL(directory.endsWith('/') ? directory : `${directory}/`, context.config.root));
       await loadAll(context, absoluteDirectory);
-      context.watcher?.add(absoluteDirectory);
-      context.watcher?.on('all', (_event, changed) => {
+      const watcher = context.watcher;
+      if (watcher === undefined || watched.has(watcher)) return;
+      watched.add(watcher);
+      watcher.add(absoluteDirectory);
+      watcher.on('all', (_event, changed) => {
         if (!changed.startsWith(absoluteDirectory)) return;
         loadAll(context, absoluteDirectory).catch((caught: unknown) => {
           context.logger.error(caught instanceof Error ? caught.message : String(caught));

@@ -72,7 +72,7 @@ describe('runNew(args)', () => {
     printed = [];
     expect(await runCheck([directory])).toBe(1);
     expect(printed.slice(0, -2)).toEqual([
-      `${directory}/coolant-x-density/correlation.yaml:4: warning: metadata still holds a TODO placeholder; replace every TODO value before review`,
+      `${directory}/coolant-x-density/correlation.yaml:4: metadata still holds 8 TODO placeholders, the first on this line; replace every TODO value`,
       `${directory}/coolant-x-density/data.csv:2: only 0 points are left to fit; a correlation needs at least 3`,
     ]);
   });
