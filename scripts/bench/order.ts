@@ -25,7 +25,7 @@ const criteria = criteriaUnderTest(explore);
 const criteriaOnly = criteria.flatMap((named) => (named.criterion ? [named.criterion] : []));
 /** outcomes[criterion][`${family}|${n}`] */
 const outcomes: Map<string, Outcome[]>[] = [...criteria, null, null].map(() => new Map());
-let flatCount = 0;
+const flatByFamily = new Map<string, number>();
 let total = 0;
 const started = Date.now();
 
@@ -40,7 +40,7 @@ for (const cell of allCells()) {
     const data = drawDataSet(cell, random);
     const evaluation = evaluateDataSet(data, criteriaOnly);
     total++;
-    if (evaluation.flat) flatCount++;
+    if (evaluation.flat) flatByFamily.set(cell.family, (flatByFamily.get(cell.family) ?? 0) + 1);
     const target = targetFor(cell, evaluation.oracleOrder);
     const reference = cell.degree !== null ? evaluation.oosRmse[cell.degree]! : evaluation.oosRmse[evaluation.oracleOrder]!;
     const picks = [...evaluation.chosen, evaluation.oracleOrder, evaluation.guardedOracleOrder];
@@ -58,5 +58,5 @@ for (const cell of allCells()) {
 
 const seconds = (Date.now() - started) / 1000;
 console.log(`# Order-selection benchmark\n`);
-console.log(`${total} data sets, ${replicates} replicates per cell, ${criteria.length} criteria; ${seconds.toFixed(1)} s on this machine (informational). Flat-data test fired on ${flatCount} data sets.\n`);
+console.log(`${total} data sets, ${replicates} replicates per cell, ${criteria.length} criteria; ${seconds.toFixed(1)} s on this machine (informational). Flat-data test (order 0) fired on: ${[...flatByFamily].map(([family, count]) => `${family === 'A1' ? 'A′' : family} ${count}`).join(', ') || 'none'}.\n`);
 report([...criteria, { label: 'x oracle (best OOS order)', criterion: null, isDefault: false }, { label: 'x oracle, ≥2 residual dof', criterion: null, isDefault: false }], outcomes, SAMPLE_SIZES as readonly number[], ['A', 'B', 'C1', 'C2'] satisfies Family[]);

@@ -13,6 +13,7 @@ import {
   pressCriterion,
   residualVarianceCriterion,
   sequentialFCriterion,
+  LOWEST_JUSTIFIED_DEFAULTS,
   type LowestJustifiedParameters,
   type OrderCriterion,
 } from '../../../src/core/order/index.ts';
@@ -24,8 +25,10 @@ export interface NamedCriterion {
   readonly isDefault: boolean;
 }
 
-function variant(label: string, parameters: LowestJustifiedParameters): NamedCriterion {
-  return { label: `x ${label}`, criterion: createLowestJustifiedCriterion(parameters), isDefault: false };
+const BASE = LOWEST_JUSTIFIED_DEFAULTS;
+
+function variant(label: string, changes: Partial<LowestJustifiedParameters>): NamedCriterion {
+  return { label: `x ${label}`, criterion: createLowestJustifiedCriterion({ ...BASE, ...changes }), isDefault: false };
 }
 
 export function criteriaUnderTest(explore: boolean): NamedCriterion[] {
@@ -38,21 +41,26 @@ export function criteriaUnderTest(explore: boolean): NamedCriterion[] {
     { label: '6 LOOCV (PRESS) min', criterion: pressCriterion, isDefault: false },
     { label: '7 sequential F (α=.05)', criterion: sequentialFCriterion, isDefault: false },
     { label: '8 lowest ≡ all higher (α=.05)', criterion: allHigherFCriterion, isDefault: false },
-    { label: '8g rule 8, ≥2 dof (k ≤ n−3)', criterion: createLowestJustifiedCriterion({ alpha: 0.05, multiplicity: 'none', looTolerance: null, looConfirmAlpha: null, minResidualDof: 2 }), isDefault: false },
+    {
+      label: '8g rule 8, ≥2 dof (k ≤ n−3)',
+      criterion: createLowestJustifiedCriterion({ ...BASE, alpha: 0.05, lowDofAlpha: null, lookAhead: null, multiplicity: 'none' }),
+      isDefault: false,
+    },
     { label: '10 χ² σ stated (95 %)', criterion: chiSquareCriterion, isDefault: false },
   ];
   if (explore) {
-    // The grid the default's parameters were chosen from (α, τ, confirmation level).
-    for (const alpha of [0.05, 0.1]) {
-      list.push(variant(`Bonf α=${alpha}, no LOO`, { alpha, multiplicity: 'bonferroni', looTolerance: null, looConfirmAlpha: null, minResidualDof: 2 }));
-    }
-    for (const tolerance of [0.1, 0.15, 0.2, 0.3]) {
-      list.push(variant(`Bonf α=0.1, τ=${tolerance} conf .05`, { alpha: 0.1, multiplicity: 'bonferroni', looTolerance: tolerance, looConfirmAlpha: 0.05, minResidualDof: 2 }));
-    }
-    list.push(variant('Bonf α=0.05, τ=0.1 conf .05', { alpha: 0.05, multiplicity: 'bonferroni', looTolerance: 0.1, looConfirmAlpha: 0.05, minResidualDof: 2 }));
-    list.push(variant('Bonf α=0.1, τ=0.15 conf .025', { alpha: 0.1, multiplicity: 'bonferroni', looTolerance: 0.15, looConfirmAlpha: 0.025, minResidualDof: 2 }));
-    list.push(variant('Bonf α=0.1, τ=0.15 conf .1', { alpha: 0.1, multiplicity: 'bonferroni', looTolerance: 0.15, looConfirmAlpha: 0.1, minResidualDof: 2 }));
-    list.push(variant('Bonf α=0.1, τ=0.1, no confirmation', { alpha: 0.1, multiplicity: 'bonferroni', looTolerance: 0.1, looConfirmAlpha: null, minResidualDof: 2 }));
+    // The grid the default's parameters were chosen from (window W, α, low-dof α, PRESS guard).
+    list.push(variant('all higher, Bonf α=0.05', { lookAhead: null, lowDofAlpha: null }));
+    list.push(variant('all higher, Bonf α=0.1', { lookAhead: null, lowDofAlpha: null, alpha: 0.1 }));
+    list.push(variant('all higher, Bonf α=0.1, PRESS τ=0.15 conf .05', { lookAhead: null, lowDofAlpha: null, alpha: 0.1, looTolerance: 0.15, looConfirmAlpha: 0.05 }));
+    list.push(variant('W=2, Bonf α=0.05 (no low-dof α)', { lowDofAlpha: null }));
+    list.push(variant('W=2, Bonf α=0.1', { lowDofAlpha: null, alpha: 0.1 }));
+    list.push(variant('W=2, α=0.05 / 0.15 if dof<10', { lowDofAlpha: 0.15 }));
+    list.push(variant('W=2, α=0.05 / 0.1 if dof<6', { lowDofBelow: 6 }));
+    list.push(variant('W=3, α=0.05 / 0.1 if dof<10', { lookAhead: 3 }));
+    list.push(variant('W=1, α=0.05 / 0.1 if dof<10', { lookAhead: 1 }));
+    list.push(variant('default + PRESS τ=0.15 conf .05', { looTolerance: 0.15, looConfirmAlpha: 0.05 }));
+    list.push(variant('default + PRESS τ=0.1, no confirmation', { looTolerance: 0.1 }));
   }
   return list;
 }

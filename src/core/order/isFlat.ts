@@ -4,7 +4,7 @@
  *
  *   F = [(S_r(0) − S_r(k))/k] / [S_r(k)/(n − k − 1)]  at level 0.05/K (Bonferroni over the K orders compared).
  *
- * This is the default rule's own test applied from order 0, so "flat" means "the data justify no trend at all".
+ * "Flat" thus means "the data justify no trend at all": no order, near or far, beats the mean at a familywise 5 %.
  * It needs an intercept and at least 4 points (otherwise there is nothing to test and the data are not called
  * flat). Constant data (S_r(0) at the floating-point floor) are flat.
  *
