@@ -12,7 +12,9 @@ export const dataPointSchema = z
     row: z.number().int().positive().describe('Data row number, 1 = first row after the header'),
     /** Line of the row in the data file, 1-based. */
     line: z.number().int().positive().describe('Line in the data file'),
+    /** x as written in the data file. */
     x: z.number().finite().describe('x value'),
+    /** y as written in the data file. */
     y: z.number().finite().describe('y value'),
     /** Standard uncertainty of y, when the file has an uncertainty column. */
     uncertainty: z.number().positive().optional().describe('Standard uncertainty of y'),
@@ -23,17 +25,24 @@ export const dataPointSchema = z
 
 /** A point left out of the fit, with the reason from the metadata. */
 export const excludedPointSchema = dataPointSchema.extend({
+  /** The reason given in fit.exclude. */
   reason: z.string().describe('Why the point is left out'),
 });
 
 /** A message kept with a loaded correlation so that the page can show it. */
 export const diagnosticSchema = z
   .object({
+    /** `error` stops the check and the build; `warning` is shown on the page. */
     severity: z.enum(['error', 'warning']).describe('error stops the build; warning is shown on the page'),
+    /** Path of the file, as given to the loader. */
     file: z.string().describe('Path of the file, as given to the loader'),
+    /** 1-based line; 0 when no line applies (a missing file). */
     line: z.number().int().nonnegative().describe('1-based line; 0 when no line applies'),
+    /** 1-based column, where it applies. */
     column: z.number().int().positive().optional().describe('1-based column, where it applies'),
+    /** The problem, in one line. */
     message: z.string().describe('The problem'),
+    /** How to fix it, when a hint helps. */
     hint: z.string().optional().describe('How to fix it'),
   })
   .strict();
@@ -41,7 +50,9 @@ export const diagnosticSchema = z
 /** A closed interval of x, in the variable's unit. */
 const intervalSchema = z
   .object({
+    /** Lowest x. */
     min: z.number().describe('Lowest x'),
+    /** Highest x. */
     max: z.number().describe('Highest x'),
   })
   .strict();
@@ -49,7 +60,9 @@ const intervalSchema = z
 /** The stored entry. */
 export const correlationEntrySchema = z
   .object({
+    /** URL slug, unique in the handbook. */
     slug: z.string().describe('URL slug'),
+    /** The validated metadata, defaults filled in. */
     meta: correlationMetaSchema,
     /** Every data row, in file order. */
     points: z.array(dataPointSchema).describe('Every data row, in file order'),
