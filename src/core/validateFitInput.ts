@@ -48,7 +48,14 @@ export function validateFitInput(data: FitData, options: FitOptions): ValidatedO
   for (const c of constraints) {
     if (!Number.isFinite(c.x) || !Number.isFinite(c.y)) throw new FitError('not-finite', `constraint (${c.x}, ${c.y}) is not finite`);
   }
-  const needed = order + (intercept ? 1 : 0) - constraints.length;
+  const coefficients = order + (intercept ? 1 : 0);
+  if (constraints.length >= coefficients) {
+    throw new FitError(
+      'constraints-fix-all',
+      `${constraints.length} pass-through point${constraints.length === 1 ? '' : 's'} fix every coefficient of an order-${order} curve; nothing is left to fit`,
+    );
+  }
+  const needed = coefficients - constraints.length;
   if (n < Math.max(1, needed)) throw new FitError('too-few-points', `order ${order} needs at least ${needed} points, the data have ${n}`);
   return {
     order,

@@ -204,3 +204,12 @@ describe('fitOrders', () => {
     expect(JSON.parse(JSON.stringify(fits[1]!.fit)).coefficients).toEqual(fits[1]!.fit!.coefficients);
   });
 });
+
+describe('fitPolynomial constraint count', () => {
+  it('fitPolynomial refuses pass-through points that fix every coefficient', () => {
+    const data = { x: [300, 350, 400], y: [1, 2, 2.5] };
+    expect(() => fitPolynomial(data, { order: 1, constraints: [{ x: 300, y: 1 }, { x: 400, y: 2.5 }] })).toThrowError(
+      /2 pass-through points fix every coefficient of an order-1 curve/,
+    );
+  });
+});
