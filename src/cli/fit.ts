@@ -101,7 +101,7 @@ function describeFitError(error: FitError, file: string, table: FitTable): CliEr
 /** Run the command; returns the exit status. */
 export async function runFit(args: readonly string[], out: (text: string) => void = console.log): Promise<number> {
   const options = parseFitArguments(args);
-  const table = readFitTable(options.file, options);
+  const table = await readFitTable(options.file, options);
   const data = { x: table.x, y: table.y, uncertainty: table.uncertainty };
   let selection: OrderSelection;
   let fit: PolynomialFit;

@@ -17,7 +17,7 @@ export interface PointsResult {
   readonly diagnostics: Diagnostic[];
 }
 
-type Role = 'x' | 'y' | 'uncertainty' | 'note';
+export type Role = 'x' | 'y' | 'uncertainty' | 'note';
 
 /** Parse one numeric cell, or describe why it is not a number. */
 function numericCell(cell: CsvCell | undefined, columnName: string, file: string, line: number): number | Diagnostic {
@@ -42,7 +42,13 @@ function numericCell(cell: CsvCell | undefined, columnName: string, file: string
  * @param columns the metadata's data block, or undefined when it could not be read (then the first two columns
  *   are checked as numeric, so number problems are still reported)
  */
-export function tableToPoints(table: CsvTable, columns: DataColumns | undefined, file: string): PointsResult {
+export function tableToPoints(
+  table: CsvTable,
+  columns: DataColumns | undefined,
+  file: string,
+  /** Where a column name came from, for messages; the CLI names its options instead of the metadata. */
+  origin: (role: Role) => string = (role) => `data.${role} in the metadata`,
+): PointsResult {
   const diagnostics: Diagnostic[] = [];
   const headerNames = table.header.map((cell) => cell.text);
 
@@ -78,7 +84,7 @@ export function tableToPoints(table: CsvTable, columns: DataColumns | undefined,
           error(
             file,
             { line: table.headerLine, column: 1 },
-            `header has no column '${name}' (named by data.${role} in the metadata)`,
+            `header has no column '${name}' (named by ${origin(role)})`,
             guess === undefined ? `the header has: ${headerNames.join(', ')}` : `did you mean '${guess}'?`,
           ),
         );

@@ -66,16 +66,16 @@ describe('correlary fit report', () => {
 
 describe('correlary fit bad input', () => {
   const cases: [string, string, string[], RegExp][] = [
-    ['non-numeric cell', 'x,y\n1,2\n2,abc\n3,4\n', [], /bad\.csv:3: 'abc' in column 'y' is not a number$/],
-    ['NaN', 'x,y\n1,2\n2,NaN\n3,4\n', [], /bad\.csv:3: 'NaN' in column 'y' is not a finite number$/],
-    ['Infinity', 'x,y\n1,2\n2,3\nInfinity,4\n', [], /bad\.csv:4: 'Infinity' in column 'x' is not a finite number$/],
-    ['empty cell', 'x,y\n1,2\n2,\n3,4\n', [], /bad\.csv:3: empty cell in column 'y'$/],
-    ['decimal comma', 'x;y\n1,5;2\n', [], /bad\.csv:1: the columns are separated by semicolons/],
-    ['unknown column', 'x,y\n1,2\n2,3\n3,4\n', ['--y', 'cp'], /bad\.csv:1: no column named 'cp' for y \(columns: x, y\)$/],
+    ['non-numeric cell', 'x,y\n1,2\n2,abc\n3,4\n', [], /bad\.csv:3:3: non-numeric value 'abc' in column 'y'$/],
+    ['NaN', 'x,y\n1,2\n2,NaN\n3,4\n', [], /bad\.csv:3:3: 'NaN' in column 'y' is not a finite number; remove the row or turn it into a # comment line$/],
+    ['Infinity', 'x,y\n1,2\n2,3\nInfinity,4\n', [], /bad\.csv:4:1: 'Infinity' in column 'x' is not a finite number; remove the row or turn it into a # comment line$/],
+    ['empty cell', 'x,y\n1,2\n2,\n3,4\n', [], /bad\.csv:3:3: empty cell in column 'y'; every row needs a value here/],
+    ['decimal comma', 'x;y\n1,5;2\n', [], /bad\.csv:1:1: fields are separated by semicolons and numbers use decimal commas, but Correlary reads only comma-separated files with '\.' decimals/],
+    ['unknown column', 'x,y\n1,2\n2,3\n3,4\n', ['--y', 'cp'], /bad\.csv:1:1: header has no column 'cp' \(named by --y\); the header has: x, y$/],
     ['constant x', 'x,y\n1,2\n1,3\n1,4\n', [], /bad\.csv: all x values are equal/],
     ['too few points', 'x,y\n1,2\n2,3\n', [], /bad\.csv: .*at least three points/],
     ['log of a negative value', 'x,y\n1,2\n2,-3\n3,4\n4,5\n', ['--transform-y', 'log'], /bad\.csv:3: y = -3 is not positive, so ln y is undefined$/],
-    ['ragged row', 'x,y\n1,2\n2,3,4\n', [], /bad\.csv:3: malformed CSV/],
+    ['ragged row', 'x,y\n1,2\n2,3,4\n', [], /bad\.csv:3: row has 3 fields but the header has 2; a decimal comma\? write 1\.5, not 1,5/],
     ['order too high', 'x,y\n1,2\n2,3\n3,5\n4,4\n', ['--order', '4'], /bad\.csv: /],
   ];
   for (const [label, text, extra, expected] of cases) {
@@ -101,7 +101,7 @@ describe('correlary fit bad input', () => {
     const result = spawnSync(process.execPath, [bin, 'fit', file], { encoding: 'utf8' });
     expect(result.status).toBe(1);
     expect(result.stderr.trim().split('\n')).toHaveLength(1);
-    expect(result.stderr).toMatch(/bin\.csv:3: 'oops' in column 'y' is not a number/);
+    expect(result.stderr).toMatch(/bin\.csv:3:3: non-numeric value 'oops' in column 'y'/);
     const ok = execFileSync(process.execPath, [bin, 'fit', csvFile('ok.csv', 'x,y\n1,1\n2,4\n3,9\n4,16\n5,25\n'), '--order', '2', '--json'], { encoding: 'utf8' });
     expect(JSON.parse(ok).coefficients).toEqual([0, 0, 1]);
   });
