@@ -49,7 +49,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const powers: number[] = [];
   for (let k = intercept ? 0 : 1; k <= order; k++) powers.push(k);
   const distinct = new Set(intercept ? u : u.filter((value) => value !== 0)).size;
-  if (powers.length - constraints.length > distinct || powers.length > distinct + constraints.length) {
+  if (powers.length - constraints.length > distinct) {
     throw new FitError(
       'too-few-distinct',
       `order ${order} needs at least ${powers.length - constraints.length} distinct x values${intercept ? '' : ' other than 0'}, the data have ${distinct}`,
