@@ -6,7 +6,7 @@
 export { selectOrder, type OrderSelection, type SelectOrderOptions } from './selectOrder.ts';
 export { orderRows, type OrderRow } from './orderRow.ts';
 export { DEFAULT_MAX_ORDER, maxCandidateOrder } from './maxCandidateOrder.ts';
-export { isFlat, FLAT_ALPHA } from './isFlat.ts';
+export { isFlat } from './isFlat.ts';
 
 // nested fits (one QR for every order)
 export { fitNestedOrders, RESIDUAL_FLOOR_RELATIVE, type NestedFits, type NestedOrderFit, type NestedFitOptions } from './nestedFits.ts';

@@ -85,7 +85,8 @@ export interface NestedFitOptions {
  * @returns the nested fits, JSON-serialisable
  * @throws FitError 'order-too-high' when the design has fewer rows than columns or a zero column
  * @example
- * fitNestedOrders([0, 1, 2, 3], [1, 3, 5, 7], { maxOrder: 2 }).fits[1].mappedCoefficients // => [4, 3, 0-ish]: v = 4 + 3t
+ * fitNestedOrders([0, 1, 2, 3], [1, 3, 5, 7], { maxOrder: 2 }).fits[1].mappedCoefficients
+ * // => [4, 3] (to rounding): v = 1 + 2u = 4 + 3t with t = (u − 1.5)/1.5
  */
 export function fitNestedOrders(u: readonly number[], v: readonly number[], options: NestedFitOptions): NestedFits {
   const n = u.length;

@@ -23,6 +23,7 @@ import { fitOfOrder, formatNumber, type CriterionName } from './criterion.ts';
 import { isFlat } from './isFlat.ts';
 import { DEFAULT_MAX_ORDER, maxCandidateOrder } from './maxCandidateOrder.ts';
 import { fitNestedOrders } from './nestedFits.ts';
+import { lowestJustifiedCriterion } from './lowestJustifiedCriterion.ts';
 import { DEFAULT_CRITERION, orderCriteria } from './orderCriteria.ts';
 import { orderRows, type OrderRow } from './orderRow.ts';
 
@@ -101,6 +102,9 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
     throw new FitError('chi-square-needs-uncertainty', 'selectOrder requires per-point uncertainties for the chiSquare criterion');
   }
 
+  if (options.maxOrder !== undefined && !(Number.isInteger(options.maxOrder) && options.maxOrder >= 1)) {
+    throw new FitError('invalid-max-order', `selectOrder requires maxOrder to be an integer ≥ 1, got ${options.maxOrder}`);
+  }
   const n = u.length;
   const distinct = new Set(u).size;
   const maxCandidate = maxCandidateOrder(n, distinct, options.maxOrder ?? DEFAULT_MAX_ORDER);
@@ -127,7 +131,7 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
   const flat = isFlat(table);
   if (flat) {
     chosenOrder = 0;
-    reason = `Order 0: the data are flat, no order from 1 to ${maxCandidate} improves significantly on the mean (extra-sum-of-squares F tests at 0.05 split over the orders compared).`;
+    reason = `Order 0: the data are flat, neither order 1 nor order 2 improves significantly on the mean (${lowestJustifiedCriterion.explain({ ...table, minCandidate: 0 }, 0).replace(/^Order 0: going higher is not significant: /, '').replace(/\.$/, '')}).`;
   } else {
     chosenOrder = criterion.choose(table);
     reason = criterion.explain(table, chosenOrder);
