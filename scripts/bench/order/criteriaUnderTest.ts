@@ -8,6 +8,7 @@ import {
   allHigherFCriterion,
   bicCriterion,
   chiSquareCriterion,
+  createChiSquareCriterion,
   createLowestJustifiedCriterion,
   lowestJustifiedCriterion,
   pressCriterion,
@@ -46,7 +47,8 @@ export function criteriaUnderTest(explore: boolean): NamedCriterion[] {
       criterion: createLowestJustifiedCriterion({ ...BASE, alpha: 0.05, lowDofAlpha: null, lookAhead: null, multiplicity: 'none' }),
       isDefault: false,
     },
-    { label: '10 χ² σ stated (95 %)', criterion: chiSquareCriterion, isDefault: false },
+    { label: '10 χ² σ stated (95 %), unguarded', criterion: createChiSquareCriterion(1), isDefault: false },
+    { label: '★ χ² mode: σ stated, ≥2 dof', criterion: chiSquareCriterion, isDefault: false },
   ];
   if (explore) {
     // The grid the default's parameters were chosen from (window W, α, low-dof α, PRESS guard).

@@ -89,14 +89,14 @@ export function report(criteria: readonly NamedCriterion[], outcomes: Outcomes, 
     return `${pct(s.exact)} / ${pct(s.under)}`;
   }), (() => { const s = summarise(pooled(outcomes[index]!, 'A1', sizes)); return `${pct(s.exact)} / ${pct(s.under)}`; })()])));
 
-  const chiIndex = criteria.findIndex((named) => named.criterion?.requiresUncertainty);
-  if (chiIndex >= 0) {
-    const bucket = outcomes[chiIndex]!;
+  const chiIndices = criteria.flatMap((named, index) => (named.criterion?.requiresUncertainty ? [index] : []));
+  if (chiIndices.length > 0) {
     console.log('\n## χ² mode (σ stated: true σ for A and B, RMS rounding σ for C1 and C2)\n');
-    console.log(markdownTable(['family', 'exact %', 'over %', 'under %', 'med ratio', 'p90 ratio', ...sizes.map((n) => `exact n=${n}`)], families.map((family) => {
+    console.log(markdownTable(['criterion', 'family', 'exact %', 'over %', 'under %', 'med ratio', 'p90 ratio', ...sizes.map((n) => `exact n=${n}`)], chiIndices.flatMap((index) => families.map((family) => {
+      const bucket = outcomes[index]!;
       const s = summarise(pooled(bucket, family, sizes));
-      return [family, pct(s.exact), pct(s.over), pct(s.under), ratio(s.medianRatio), ratio(s.p90Ratio), ...sizes.map((n) => pct(summarise(bucket.get(`${family}|${n}`) ?? []).exact))];
-    })));
+      return [criteria[index]!.label, family, pct(s.exact), pct(s.over), pct(s.under), ratio(s.medianRatio), ratio(s.p90Ratio), ...sizes.map((n) => pct(summarise(bucket.get(`${family}|${n}`) ?? []).exact))];
+    }))));
   }
 
   console.log('\n## README table\n');

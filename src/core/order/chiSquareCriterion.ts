@@ -4,8 +4,9 @@
  *
  *   χ²(m) = Σ_i (r_i / σ_i)² ≤ χ²_{0.95}(n − p).
  *
- * If no order passes (the stated uncertainties are too small for any candidate), the order with the smallest
- * reduced χ² = χ²/(n − p) is taken and selectOrder adds a warning. By design it returns the lowest order
+ * Only orders keeping at least two residual degrees of freedom are candidates (as in the default rule; a
+ * near-interpolating fit passes a χ² test too easily). If no order passes (the stated uncertainties are too
+ * small for any candidate), the order with the smallest reduced χ² = χ²/(n − p) is taken and selectOrder warns. By design it returns the lowest order
  * *consistent* with σ, so on smooth non-polynomial data it stops short of the most accurate order.
  *
  * Reference: Bevington & Robinson, *Data Reduction and Error Analysis for the Physical Sciences*, 3rd ed.,
@@ -34,37 +35,57 @@ export function chiSquareBound(dof: number): number {
   return value;
 }
 
-/** The lowest candidate order passing the χ² test, or null when none does. */
-export function lowestConsistentOrder(table: CandidateTable): number | null {
-  for (let order = table.minCandidate; order <= table.maxCandidate; order++) {
+/** The highest candidate order keeping at least `minResidualDof` residual dof (minCandidate when none does). */
+function guardedMaximum(table: CandidateTable, minResidualDof: number): number {
+  for (let order = table.maxCandidate; order > table.minCandidate; order--) {
+    if (fitOfOrder(table, order).degreesOfFreedom >= minResidualDof) return order;
+  }
+  return table.minCandidate;
+}
+
+/** The lowest candidate order (keeping `minResidualDof` residual dof) passing the χ² test, or null when none does. */
+export function lowestConsistentOrder(table: CandidateTable, minResidualDof = 2): number | null {
+  const highest = guardedMaximum(table, minResidualDof);
+  for (let order = table.minCandidate; order <= highest; order++) {
     const fit = fitOfOrder(table, order);
     if (fit.degreesOfFreedom > 0 && fit.residualSumOfSquares <= chiSquareBound(fit.degreesOfFreedom)) return order;
   }
   return null;
 }
 
-export const chiSquareCriterion: OrderCriterion = {
-  name: 'chiSquare',
-  label: 'χ² consistency (95 %)',
-  rule: 'Choose the lowest order whose weighted residual sum of squares is within the 95 % point of χ²(n − p), given the stated uncertainties.',
-  requiresUncertainty: true,
-  choose(table: CandidateTable): number {
-    const consistent = lowestConsistentOrder(table);
-    if (consistent !== null) return consistent;
-    return argminOrder(table, (order) => {
+/**
+ * Build the χ² rule; `minResidualDof` = 2 is the product default, 1 reproduces the unguarded textbook rule.
+ * @example
+ * createChiSquareCriterion(1).choose(table) // => lowest m with χ²(m) ≤ χ²_0.95(n − p), any m ≤ n − 2
+ */
+export function createChiSquareCriterion(minResidualDof: number): OrderCriterion {
+  return {
+    name: 'chiSquare',
+    label: `χ² consistency (95 %, ≥${minResidualDof} dof)`,
+    rule: `Choose the lowest order, keeping at least ${minResidualDof} residual degree${minResidualDof === 1 ? '' : 's'} of freedom, whose weighted residual sum of squares is within the 95 % point of χ²(n − p), given the stated uncertainties.`,
+    requiresUncertainty: true,
+    choose(table: CandidateTable): number {
+      const consistent = lowestConsistentOrder(table, minResidualDof);
+      if (consistent !== null) return consistent;
+      const highest = guardedMaximum(table, minResidualDof);
+      return argminOrder({ ...table, maxCandidate: highest }, (order) => {
+        const fit = fitOfOrder(table, order);
+        return fit.degreesOfFreedom > 0 ? fit.residualSumOfSquares / fit.degreesOfFreedom : Number.NaN;
+      });
+    },
+    explain(table: CandidateTable, order: number): string {
       const fit = fitOfOrder(table, order);
-      return fit.degreesOfFreedom > 0 ? fit.residualSumOfSquares / fit.degreesOfFreedom : Number.NaN;
-    });
-  },
-  explain(table: CandidateTable, order: number): string {
-    const fit = fitOfOrder(table, order);
-    const chiSquare = fit.residualSumOfSquares;
-    const bound = chiSquareBound(fit.degreesOfFreedom);
-    const p = chiSquareUpperP(chiSquare, fit.degreesOfFreedom);
-    if (chiSquare <= bound) {
-      const lowerNote = order > table.minCandidate ? `, and order ${order - 1} is not (χ² = ${formatNumber(fitOfOrder(table, order - 1).residualSumOfSquares)})` : '';
-      return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${formatNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${formatNumber(bound)} (p = ${formatP(p)})${lowerNote}.`;
-    }
-    return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${formatNumber(chiSquare / fit.degreesOfFreedom)} (p = ${formatP(p)}).`;
-  },
-};
+      const chiSquare = fit.residualSumOfSquares;
+      const bound = chiSquareBound(fit.degreesOfFreedom);
+      const p = chiSquareUpperP(chiSquare, fit.degreesOfFreedom);
+      if (chiSquare <= bound) {
+        const lowerNote = order > table.minCandidate ? `, and order ${order - 1} is not (χ² = ${formatNumber(fitOfOrder(table, order - 1).residualSumOfSquares)})` : '';
+        return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${formatNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${formatNumber(bound)} (p = ${formatP(p)})${lowerNote}.`;
+      }
+      return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${formatNumber(chiSquare / fit.degreesOfFreedom)} (p = ${formatP(p)}).`;
+    },
+  };
+}
+
+/** The χ² consistency criterion with the 2-residual-dof guard. */
+export const chiSquareCriterion: OrderCriterion = createChiSquareCriterion(2);

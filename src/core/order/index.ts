@@ -35,7 +35,7 @@ export { bicCriterion, bicOf } from './bicCriterion.ts';
 export { pressCriterion, looRmseOf } from './pressCriterion.ts';
 export { sequentialFCriterion, SEQUENTIAL_F_ALPHA } from './sequentialFCriterion.ts';
 export { allHigherFCriterion, ALL_HIGHER_F_ALPHA } from './allHigherFCriterion.ts';
-export { chiSquareCriterion, chiSquareBound, lowestConsistentOrder, CHI_SQUARE_LEVEL } from './chiSquareCriterion.ts';
+export { chiSquareCriterion, chiSquareBound, createChiSquareCriterion, lowestConsistentOrder, CHI_SQUARE_LEVEL } from './chiSquareCriterion.ts';
 export { argminOrder } from './argminOrder.ts';
 
 // F tests

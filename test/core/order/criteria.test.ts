@@ -8,6 +8,7 @@ import {
   bicCriterion,
   bicOf,
   chiSquareCriterion,
+  createChiSquareCriterion,
   fitOfOrder,
   looRmseOf,
   pressCriterion,
@@ -90,6 +91,15 @@ describe('chiSquareCriterion', () => {
     expect(chiSquareCriterion.choose(table)).toBe(2);
     expect(chiSquareCriterion.explain(table, 2)).toContain('14.1');
   });
+  it('chiSquareCriterion keeps 2 residual dof: an order passing only with 1 dof is not taken', () => {
+    // n = 6: order 4 leaves 1 dof and passes (χ² = 0.5 ≤ χ²₀.₉₅(1) = 3.841); orders 1–3 fail
+    // (χ²₀.₉₅(4) = 9.488, (3) = 7.815, (2) = 5.991; from memory, standard χ² table). The guarded rule falls back to
+    // the smallest reduced χ² among orders 1–3: 40/4 = 10, 30/3 = 10, 12/2 = 6 → order 3; unguarded takes 4.
+    const table = handTable(6, [400, 40, 30, 12, 0.5], { uncertaintyGiven: true });
+    expect(chiSquareCriterion.choose(table)).toBe(3);
+    expect(createChiSquareCriterion(1).choose(table)).toBe(4);
+  });
+
   it('chiSquareCriterion falls back to the smallest reduced χ² when no order is consistent', () => {
     const table = handTable(10, [400, 80, 70, 40, 39], { uncertaintyGiven: true });
     // reduced χ² = S_r/(n − p): 80/8 = 10, 70/7 = 10, 40/6 = 6.67, 39/5 = 7.8 → order 3
