@@ -1,0 +1,49 @@
+/**
+ * What the browser chart draws, computed at build time: the points, the fitted curve with its confidence and
+ * prediction bands on an even grid over the validity range, and the residuals. The client only draws this.
+ */
+import { bands } from '../../core/index.ts';
+import { plainSymbol, unitSuffix, usedPoints, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
+
+export interface ChartData {
+  readonly xLabel: string;
+  readonly yLabel: string;
+  readonly residualLabel: string;
+  readonly confidence: number;
+  readonly range: { readonly min: number; readonly max: number };
+  /** Points used in the fit, with the residual y − ŷ in y's unit. */
+  readonly points: readonly { readonly row: number; readonly x: number; readonly y: number; readonly residual: number }[];
+  /** Points left out of the fit. */
+  readonly excluded: readonly { readonly row: number; readonly x: number; readonly y: number; readonly reason: string }[];
+  /** Curve and bands: [x, y, confidence low, confidence high, prediction low, prediction high]; null where undefined. */
+  readonly curve: readonly (readonly (number | null)[])[];
+}
+
+/** Grid points over the range; the ends are exactly min and max. */
+export function evenGrid(min: number, max: number, count: number): number[] {
+  return Array.from({ length: count }, (_, i) => (i === 0 ? min : i === count - 1 ? max : min + ((max - min) * i) / (count - 1)));
+}
+
+function finiteOrNull(value: number): number | null {
+  return Number.isFinite(value) ? value : null;
+}
+
+/** Chart data for one correlation, with bands on `count` grid points (default 200). */
+export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 200): ChartData {
+  const { variable, property } = entry.meta;
+  const grid = evenGrid(entry.range.min, entry.range.max, count);
+  const curve = bands(fit, grid).map((band) =>
+    [band.x, band.y, band.confidenceLow, band.confidenceHigh, band.predictionLow, band.predictionHigh].map(finiteOrNull),
+  );
+  const used = usedPoints(entry);
+  return {
+    xLabel: `${variable.name}, ${plainSymbol(variable.symbol)}${unitSuffix(variable.unit) ? ` (${variable.unit})` : ''}`,
+    yLabel: `${property.name}, ${plainSymbol(property.symbol)}${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
+    residualLabel: `residual y − ŷ${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
+    confidence: fit.confidence,
+    range: entry.range,
+    points: used.map((point, i) => ({ row: point.row, x: point.x, y: point.y, residual: fit.points.residualsOriginal[i] ?? NaN })),
+    excluded: entry.excluded.map((point) => ({ row: point.row, x: point.x, y: point.y, reason: point.reason })),
+    curve,
+  };
+}

@@ -1,0 +1,77 @@
+/**
+ * Typed views of one stored entry of the `correlations` collection. The entry keeps the fit and the order
+ * selection as plain records (src/schema/correlationEntry.ts); they are the core's PolynomialFit and
+ * OrderSelection, so the pages read them through these casts in one place.
+ */
+import type { PolynomialFit } from '../../core/index.ts';
+import type { OrderSelection } from '../../core/order/index.ts';
+import type { CorrelationEntry, DataPoint } from '../../schema/index.ts';
+
+export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection };
+
+/** The entry's fit, or null when the core refused the data. */
+export function fitOf(entry: CorrelationEntry): PolynomialFit | null {
+  return entry.fit === null ? null : (entry.fit as unknown as PolynomialFit);
+}
+
+/** The entry's order selection, or null. */
+export function selectionOf(entry: CorrelationEntry): OrderSelection | null {
+  return entry.orderSelection === null ? null : (entry.orderSelection as unknown as OrderSelection);
+}
+
+/** The points used in the fit, in file order: the same order as the fit's per-point diagnostics. */
+export function usedPoints(entry: CorrelationEntry): DataPoint[] {
+  const excludedRows = new Set(entry.excluded.map((point) => point.row));
+  return entry.points.filter((point) => !excludedRows.has(point.row));
+}
+
+/** Unit suffix for text: "" for a dimensionless quantity (unit "1"), else " unit". */
+export function unitSuffix(unit: string): string {
+  return unit === '1' ? '' : ` ${unit}`;
+}
+
+/**
+ * A TeX symbol as plain text for downloads and terminals: commands lose their backslash, groups their braces.
+ * @example plainSymbol('\\varepsilon_{th}') // => "varepsilon_th"
+ */
+export function plainSymbol(tex: string): string {
+  return tex.replace(/\\([A-Za-z]+)\s*/g, '$1').replace(/[{}]/g, '').replace(/\\,/g, ' ').trim();
+}
+
+/** "253.15 K ≤ T ≤ 373.15 K", with the symbol as plain text. */
+export function rangeText(entry: CorrelationEntry): string {
+  const unit = unitSuffix(entry.meta.variable.unit);
+  return `${entry.range.min}${unit} ≤ ${plainSymbol(entry.meta.variable.symbol)} ≤ ${entry.range.max}${unit}`;
+}
+
+/** The fitted variable u in words, e.g. "u = 1/T". */
+export function transformXText(fit: Pick<PolynomialFit, 'transformX'>, symbol: string): string {
+  if (fit.transformX === 'reciprocal') return `1/${symbol}`;
+  if (fit.transformX === 'log') return `ln(${symbol})`;
+  return symbol;
+}
+
+/** The fitted response v in words, e.g. "ln(mu)". */
+export function transformYText(fit: Pick<PolynomialFit, 'transformY'>, symbol: string): string {
+  return fit.transformY === 'log' ? `ln(${symbol})` : symbol;
+}
+
+/** Notice carried by every page and download of invented demonstration data. */
+export const INVENTED_NOTICE =
+  'Invented data: this correlation is fitted to made-up demonstration numbers. It describes no real substance and must not be used for any engineering purpose.';
+
+/** The notice without its "Invented data: " lead, for pages that set the lead in bold. */
+export const INVENTED_NOTICE_BODY = INVENTED_NOTICE.replace(/^Invented data: (.)/, (_, first: string) => first.toUpperCase());
+
+/** First letter upper-case, for names that start a sentence. @example capitalize('density') // => "Density" */
+export function capitalize(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** Review status as words. */
+export const REVIEW_LABELS: Record<string, string> = {
+  draft: 'Draft',
+  'in-review': 'In review',
+  approved: 'Approved',
+  withdrawn: 'Withdrawn',
+};
