@@ -17,11 +17,11 @@
  *   which smooth property curves do have (the forward sequential F test stops there: worst p90 ratio 14).
  * - Comparing with only two orders, not all higher ones, keeps the Bonferroni split mild (2.5 % per test) and
  *   stops chance improvements at far orders with few dof (the all-higher rule over-fits 15 % of polynomials).
- * - 10 % for tests with < 10 residual dof recovers power with 8–12 points (B n = 8 p90 ratio 2.57 instead of
- *   about 2.9 at 5 %), where over-fitting is rare anyway.
+ * - 10 % for tests with < 10 residual dof recovers power with 8–12 points (worst family × n p90 ratio 2.57
+ *   instead of 3.29 at 5 % throughout), where over-fitting is rare anyway.
  * - At least 2 residual dof: no near-interpolating fit, and every F denominator has ≥ 2 dof.
  * An optional leave-one-out (PRESS) guard was measured too and is off by default: with the two-order window
- * it changed nothing material (see the benchmark's --explore rows).
+ * it changed nothing material, and without confirmation by the F test it over-fits (benchmark --explore rows).
  *
  * References: Draper & Smith, *Applied Regression Analysis*, 3rd ed., §6.1 (extra sum of squares);
  * NIST/SEMATECH e-Handbook §4.4.4 (https://www.itl.nist.gov/div898/handbook/pmd/section4/pmd44.htm);
