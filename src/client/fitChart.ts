@@ -18,6 +18,7 @@ export interface FitChartData {
   readonly points: readonly { readonly row: number; readonly x: number; readonly y: number; readonly residual: number }[];
   readonly excluded: readonly { readonly row: number; readonly x: number; readonly y: number; readonly reason: string }[];
   readonly curve: readonly (readonly (number | null)[])[];
+  readonly residualBands: readonly (readonly (number | null)[])[];
 }
 
 type Row = readonly (number | null)[];
@@ -68,12 +69,12 @@ function frame(container: HTMLElement, height: number, label: string): Svg {
     .attr('aria-label', label);
 }
 
-function drawAxes(svg: Svg, x: ScaleLinear<number, number>, y: ScaleLinear<number, number>, height: number, xLabel: string, yLabel: string): void {
+function drawAxes(svg: Svg, x: ScaleLinear<number, number>, y: ScaleLinear<number, number>, height: number, xLabel: string, yLabel: string, yTicks = 6): void {
   svg
     .append('g')
     .attr('transform', `translate(0,${height - MARGIN.bottom})`)
     .call(axisBottom(x).ticks(8));
-  svg.append('g').attr('transform', `translate(${MARGIN.left},0)`).call(axisLeft(y).ticks(6));
+  svg.append('g').attr('transform', `translate(${MARGIN.left},0)`).call(axisLeft(y).ticks(yTicks));
   svg
     .append('text')
     .attr('x', (MARGIN.left + WIDTH - MARGIN.right) / 2)
@@ -146,13 +147,16 @@ export function drawFitChart(container: HTMLElement, data: FitChartData): void {
     .attr('stroke-width', 1.5);
 
   const residuals = finite(data.points.map((point) => point.residual));
-  const limit = Math.max(...residuals.map(Math.abs), Number.MIN_VALUE) * 1.1;
+  const bandValues = finite(data.residualBands.flatMap((row) => row.slice(1)));
+  const limit = Math.max(...residuals.map(Math.abs), ...bandValues.map(Math.abs), Number.MIN_VALUE) * 1.1;
   const r = scaleLinear()
     .domain([-limit, limit])
     .nice()
     .range([RESIDUAL_HEIGHT - MARGIN.bottom, MARGIN.top]);
-  const lower = frame(container, RESIDUAL_HEIGHT, 'Residuals against x');
-  drawAxes(lower, x, r, RESIDUAL_HEIGHT, data.xLabel, 'residual');
+  const lower = frame(container, RESIDUAL_HEIGHT, 'Residuals against x, with the bands drawn about the curve');
+  lower.append('path').attr('d', band(x, r, 3, 4)(data.residualBands) ?? '').attr('fill', COLORS.prediction);
+  lower.append('path').attr('d', band(x, r, 1, 2)(data.residualBands) ?? '').attr('fill', COLORS.confidence);
+  drawAxes(lower, x, r, RESIDUAL_HEIGHT, data.xLabel, 'residual', 4);
   lower
     .append('line')
     .attr('x1', MARGIN.left)

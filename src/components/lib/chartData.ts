@@ -17,6 +17,11 @@ export interface ChartData {
   readonly excluded: readonly { readonly row: number; readonly x: number; readonly y: number; readonly reason: string }[];
   /** Curve and bands: [x, y, confidence low, confidence high, prediction low, prediction high]; null where undefined. */
   readonly curve: readonly (readonly (number | null)[])[];
+  /**
+   * The same bands about the curve, for the residual plot: [x, confidence low − y, confidence high − y,
+   * prediction low − y, prediction high − y]. Points outside the prediction band stand out there.
+   */
+  readonly residualBands: readonly (readonly (number | null)[])[];
 }
 
 /** Grid points over the range; the ends are exactly min and max. */
@@ -32,8 +37,12 @@ function finiteOrNull(value: number): number | null {
 export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 200): ChartData {
   const { variable, property } = entry.meta;
   const grid = evenGrid(entry.range.min, entry.range.max, count);
-  const curve = bands(fit, grid).map((band) =>
+  const computed = bands(fit, grid);
+  const curve = computed.map((band) =>
     [band.x, band.y, band.confidenceLow, band.confidenceHigh, band.predictionLow, band.predictionHigh].map(finiteOrNull),
+  );
+  const residualBands = computed.map((band) =>
+    [band.x, band.confidenceLow - band.y, band.confidenceHigh - band.y, band.predictionLow - band.y, band.predictionHigh - band.y].map(finiteOrNull),
   );
   const used = usedPoints(entry);
   return {
@@ -45,5 +54,6 @@ export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 2
     points: used.map((point, i) => ({ row: point.row, x: point.x, y: point.y, residual: fit.points.residualsOriginal[i] ?? NaN })),
     excluded: entry.excluded.map((point) => ({ row: point.row, x: point.x, y: point.y, reason: point.reason })),
     curve,
+    residualBands,
   };
 }

@@ -68,7 +68,7 @@ export function coefficientsJson(entry: CorrelationEntry) {
     })),
     confidence: fit.confidence,
     mapped: {
-      description: 'v = sum over k of b_k * t^k with t = (u - center) / halfWidth; better conditioned for evaluation',
+      description: 'v = sum over k of b_k * xi^k with xi = (u - center) / halfWidth, on [-1, 1] over the data; better conditioned for evaluation',
       center: fit.mapped.map.center,
       halfWidth: fit.mapped.map.halfWidth,
       coefficients: fit.mapped.coefficients,
@@ -112,7 +112,7 @@ export function coefficientsCsv(entry: CorrelationEntry): string {
   const xUnit = meta.variable.unit;
   const yUnit = meta.property.unit;
   const lines: string[] = [];
-  if (data.notice) lines.push(comment(`INVENTED DATA. ${data.notice}`));
+  if (data.notice) lines.push(comment(data.notice.replace(/^Invented data:/, 'INVENTED DATA:')));
   for (const caution of data.cautions) lines.push(comment(`CAUTION: ${caution}`));
   lines.push(comment(`Title: ${meta.title}`));
   lines.push(comment(`Property: ${meta.property.name}, ${data.form.v.replace(/^ln\((.*)\)$/, '$1')} [${yUnit}]`));
@@ -120,7 +120,7 @@ export function coefficientsCsv(entry: CorrelationEntry): string {
   lines.push(comment(`Validity range: ${data.validityRange.min} to ${data.validityRange.max} ${xUnit}`));
   lines.push(comment(`Form: ${data.form.v} = sum of a_k * u^k, u = ${data.form.u}, order ${data.form.order}, transformX ${data.form.transformX}, transformY ${data.form.transformY}, intercept ${data.form.intercept}, weighted ${data.form.weighted}`));
   lines.push(comment(`Equation (rounded to the digits needed): ${data.equation}`));
-  lines.push(comment(`Mapped form: ${data.form.v} = sum of b_k * t^k, t = (u - ${String(data.mapped.center)}) / ${String(data.mapped.halfWidth)}, b = [${data.mapped.coefficients.map(String).join(', ')}]`));
+  lines.push(comment(`Mapped form: ${data.form.v} = sum of b_k * xi^k, xi = (u - ${String(data.mapped.center)}) / ${String(data.mapped.halfWidth)}, b = [${data.mapped.coefficients.map(String).join(', ')}]`));
   for (const check of data.checkValues) lines.push(comment(`Check value: x = ${String(check.x)} ${xUnit} gives y = ${String(check.y)} ${yUnit}`));
   lines.push(comment(`Material: ${[meta.material.name, meta.material.phase, meta.material.pressure, meta.material.grade, meta.material.conditions].filter(Boolean).join('; ')}`));
   lines.push(comment(`Source: ${meta.source.citation} (${meta.source.method}${meta.source.derivedFrom ? `, derived from ${meta.source.derivedFrom}` : ''}), ${meta.source.date}, prepared by ${meta.source.preparedBy}`));

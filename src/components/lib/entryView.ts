@@ -32,10 +32,10 @@ export function unitSuffix(unit: string): string {
 
 /**
  * A TeX symbol as plain text for downloads and terminals: commands lose their backslash, groups their braces.
- * @example plainSymbol('\\varepsilon_{th}') // => "varepsilon_th"
+ * @example plainSymbol('\\varepsilon_{th}') // => "varepsilon_th"; plainSymbol('\\Delta h_{lv}') // => "Delta h_lv"
  */
 export function plainSymbol(tex: string): string {
-  return tex.replace(/\\([A-Za-z]+)\s*/g, '$1').replace(/[{}]/g, '').replace(/\\,/g, ' ').trim();
+  return tex.replace(/\\[,;:! ]/g, ' ').replace(/\\([A-Za-z]+)/g, '$1').replace(/[{}]/g, '').replace(/\s+/g, ' ').trim();
 }
 
 /** "253.15 K ≤ T ≤ 373.15 K", with the symbol as plain text. */
