@@ -1,0 +1,191 @@
+/**
+ * The built site: `astro build` once into a temporary directory, then every demo correlation's page and downloads
+ * are checked against the data, and (when Chromium is installed) the chart is drawn in a real browser.
+ *
+ * Expected coefficients come from calling fitPolynomial on the same points and options here, independently of the
+ * site, and must match the downloads to the last bit: JSON numbers and CSV fields are shortest round-trip text.
+ */
+import { existsSync } from 'node:fs';
+import { readFile, rm } from 'node:fs/promises';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CAUTIONS, cautionsFor, fitPolynomial, type PolynomialFit } from '../../src/core/index.ts';
+import { fitDataset, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
+import { buildSite, projectRoot } from './buildSite.ts';
+import { serveDirectory } from './staticServer.ts';
+
+const CHROMIUM = '/usr/bin/chromium';
+
+let outDir = '';
+let correlations: LoadedCorrelation[] = [];
+
+beforeAll(async () => {
+  const handbook = await readHandbook(path.join(projectRoot, 'content'));
+  correlations = handbook.datasets.map((dataset) => dataset.correlation).filter((item): item is LoadedCorrelation => item !== undefined);
+  outDir = await buildSite();
+}, 120_000);
+
+afterAll(async () => {
+  if (outDir) await rm(outDir, { recursive: true, force: true });
+});
+
+/** Astro's text escaping, for looking up page text. */
+function escapeHtml(text: string): string {
+  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+}
+
+function unitSuffix(unit: string): string {
+  return unit === '1' ? '' : ` ${unit}`;
+}
+
+/** The fit computed here from the loaded points, with the order the site published. */
+function expectedFit(correlation: LoadedCorrelation, order: number): PolynomialFit {
+  const settings = correlation.meta.fit;
+  return fitPolynomial(
+    {
+      x: correlation.used.map((point) => point.x),
+      y: correlation.used.map((point) => point.y),
+      uncertainty: settings.weights === 'uncertainty' ? correlation.used.map((point) => point.uncertainty ?? NaN) : undefined,
+    },
+    {
+      order,
+      intercept: settings.intercept,
+      transformX: settings.transform.x,
+      transformY: settings.transform.y,
+      constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
+    },
+  );
+}
+
+function page(slug: string): Promise<string> {
+  return readFile(path.join(outDir, 'correlations', slug, 'index.html'), 'utf8');
+}
+
+describe('astro build of the demo handbook', () => {
+  it('the demo handbook has correlations to check', () => {
+    expect(correlations.length).toBe(13);
+  });
+
+  it('index.html lists every correlation, links its page and badges invented data', async () => {
+    const html = await readFile(path.join(outDir, 'index.html'), 'utf8');
+    for (const correlation of correlations) {
+      expect(html, correlation.slug).toContain(`href="/correlations/${correlation.slug}/"`);
+      expect(html).toContain(escapeHtml(correlation.meta.title));
+    }
+    const invented = correlations.filter((correlation) => correlation.meta.invented).length;
+    expect(html.match(/class="badge badge-invented"/g)?.length ?? 0).toBe(invented);
+    for (const caution of CAUTIONS) expect(html).toContain(escapeHtml(caution));
+  });
+
+  it('every correlation page carries the cautions, KaTeX output, the validity range and (when invented) the banner', async () => {
+    for (const correlation of correlations) {
+      const html = await page(correlation.slug);
+      for (const caution of CAUTIONS) expect(html, `${correlation.slug}: caution`).toContain(escapeHtml(caution));
+      expect(html, `${correlation.slug}: katex`).toContain('class="katex"');
+      expect(html, `${correlation.slug}: katex display`).toContain('class="katex-display"');
+      const unit = escapeHtml(unitSuffix(correlation.meta.variable.unit));
+      expect(html, `${correlation.slug}: range`).toContain(`<span class="range-text">${correlation.range.min}${unit}</span>`);
+      expect(html, `${correlation.slug}: range`).toContain(`<span class="range-text">${correlation.range.max}${unit}</span>`);
+      expect(html.includes('class="invented-banner"'), `${correlation.slug}: banner`).toBe(correlation.meta.invented);
+      expect(html, `${correlation.slug}: no raw NaN or null in a cell`).not.toMatch(/>\s*(NaN|null|undefined)\s*</);
+      expect(html, `${correlation.slug}: chosen order highlighted`).toContain('<tr class="chosen"');
+      for (const excluded of correlation.excluded) expect(html, `${correlation.slug}: excluded reason`).toContain(escapeHtml(excluded.reason));
+    }
+  });
+
+  it('each page embeds chart data: 200 grid points from range.min to range.max, and every point', async () => {
+    for (const correlation of correlations) {
+      const html = await page(correlation.slug);
+      const match = /<script type="application\/json">(.*?)<\/script>/s.exec(html);
+      expect(match, correlation.slug).not.toBeNull();
+      const data = JSON.parse(match![1]!) as { curve: number[][]; residualBands: number[][]; points: unknown[]; excluded: unknown[] };
+      expect(data.curve).toHaveLength(200);
+      expect(data.residualBands).toHaveLength(200);
+      expect(data.curve[0]![0]).toBe(correlation.range.min);
+      expect(data.curve.at(-1)![0]).toBe(correlation.range.max);
+      expect(data.points).toHaveLength(correlation.used.length);
+      expect(data.excluded).toHaveLength(correlation.excluded.length);
+    }
+  });
+
+  it('coefficients.json: cautions, range, notice, and coefficients equal to fitPolynomial to the last bit', async () => {
+    for (const correlation of correlations) {
+      const text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8');
+      const json = JSON.parse(text);
+      const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
+      expect(json.cautions).toEqual(cautionsFor(correlation.range, unit));
+      expect(json.cautions).toContain(CAUTIONS[1]);
+      expect(json.validityRange).toEqual({ ...correlation.range, unit: correlation.meta.variable.unit });
+      expect(json.invented).toBe(correlation.meta.invented);
+      if (correlation.meta.invented) expect(json.notice).toMatch(/^Invented data: /);
+      // The published order is the one the loader chose.
+      expect(json.form.order).toBe(fitDataset(correlation).fit?.order);
+      const fit = expectedFit(correlation, json.form.order);
+      const published = (json.coefficients as { value: number }[]).map((row) => row.value);
+      expect(published.length).toBe(fit.coefficients.length);
+      published.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}: ${value} vs ${fit.coefficients[k]}`).toBe(true));
+      expect(json.mapped.coefficients).toEqual(fit.mapped.coefficients);
+      expect(json.checkValues).toEqual(fit.checkValues);
+      expect((json.coefficients as { significantDigits: number }[]).map((row) => row.significantDigits)).toEqual(fit.significantDigits);
+      expect(typeof json.equation).toBe('string');
+      expect(json.provenance.source.citation).toBe(correlation.meta.source.citation);
+    }
+  });
+
+  it('coefficients.csv: cautions as # comment lines, then a header and full-precision coefficients', async () => {
+    for (const correlation of correlations) {
+      const text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.csv'), 'utf8');
+      const lines = text.trimEnd().split('\n');
+      const comments = lines.filter((line) => line.startsWith('#'));
+      const table = lines.filter((line) => !line.startsWith('#'));
+      expect(lines.slice(0, comments.length).every((line) => line.startsWith('#')), 'comments come first').toBe(true);
+      const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
+      for (const caution of cautionsFor(correlation.range, unit)) expect(comments).toContain(`# CAUTION: ${caution}`);
+      expect(comments.some((line) => line.startsWith('# INVENTED DATA:'))).toBe(correlation.meta.invented);
+      expect(table[0]).toBe('k,coefficient,significant_digits,rounded,standard_error,ci95_low,ci95_high');
+      const json = JSON.parse(await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8'));
+      const fit = expectedFit(correlation, json.form.order);
+      const values = table.slice(1).map((line) => Number(line.split(',')[1]));
+      expect(values.length).toBe(fit.coefficients.length);
+      values.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}`).toBe(true));
+    }
+  });
+});
+
+describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; install it with apt-get install -y chromium)`, () => {
+  it('draws points, curve, bands and residuals from the embedded data, and shows a tooltip on hover', async () => {
+    const { chromium } = await import('playwright-core');
+    const server = await serveDirectory(outDir);
+    const browser = await chromium.launch({ executablePath: CHROMIUM, args: ['--no-sandbox'] });
+    try {
+      const target = correlations.find((correlation) => correlation.excluded.length > 0) ?? correlations[0]!;
+      const browserPage = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+      const errors: string[] = [];
+      browserPage.on('pageerror', (error) => errors.push(String(error)));
+      browserPage.on('console', (message) => {
+        if (message.type() === 'error') errors.push(message.text());
+      });
+      await browserPage.goto(`${server.url}/correlations/${target.slug}/`, { waitUntil: 'networkidle' });
+      const svgs = browserPage.locator('[data-fit-chart] svg');
+      await svgs.first().waitFor({ timeout: 10_000 });
+      expect(await svgs.count()).toBe(2);
+      const mainCircles = await svgs.nth(0).locator('g circle').count();
+      expect(mainCircles).toBe(target.used.length + target.excluded.length);
+      const residualCircles = await svgs.nth(1).locator('g circle').count();
+      expect(residualCircles).toBe(target.used.length);
+      const paths = await svgs.nth(0).locator(':scope > path').evaluateAll((nodes) => nodes.map((node) => node.getAttribute('d') ?? ''));
+      expect(paths.filter((d) => d.length > 100).length).toBe(3); // prediction band, confidence band, curve
+
+      const firstPoint = svgs.nth(0).locator('g circle').first();
+      const box = (await firstPoint.boundingBox())!;
+      await browserPage.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+      const tooltip = browserPage.locator('.chart-tooltip');
+      await tooltip.waitFor({ state: 'visible', timeout: 5_000 });
+      expect(await tooltip.textContent()).toMatch(/^row \d+/);
+      expect(errors).toEqual([]);
+    } finally {
+      await browser.close();
+      await server.close();
+    }
+  });
+});
