@@ -12,9 +12,12 @@ import {
   type PolynomialFit,
   type TransformX,
   type TransformY,
+  orderCriteria,
+  selectOrder,
   validateFitData,
+  type CriterionName,
+  type OrderSelection,
 } from '../core/index.ts';
-import { orderCriteria, selectOrder, type CriterionName, type OrderSelection } from '../core/order/index.ts';
 import { CliError } from './cliError.ts';
 import { readFitTable, type FitTable } from './readFitTable.ts';
 

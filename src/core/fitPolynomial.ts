@@ -28,7 +28,7 @@ import { conditionNumber, solveLeastSquares } from './leastSquares.ts';
 import { lackOfFit } from './stats/lackOfFit.ts';
 import { residualStatistics, totalSumOfSquares } from './stats/residualStatistics.ts';
 import { runsTest } from './stats/runsTest.ts';
-import { forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+import { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
 import { validateFitInput } from './validateFitInput.ts';
 import type { FitData, FitOptions, PolynomialFit } from './types.ts';
 
@@ -42,8 +42,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const n = data.x.length;
   const { u, v } = transformData(data.x, data.y, transformX, transformY);
   const weighted = data.uncertainty !== undefined;
-  const sigmaV = data.uncertainty?.map((sigma, i) => (transformY === 'log' ? sigma / data.y[i]! : sigma));
-  const weights = sigmaV ? sigmaV.map((sigma) => 1 / (sigma * sigma)) : new Array<number>(n).fill(1);
+  const weights = data.uncertainty ? fittedSpaceWeights(data.y, data.uncertainty, transformY) : new Array<number>(n).fill(1);
   const rootWeights = weights.map(Math.sqrt);
 
   const powers: number[] = [];
@@ -141,7 +140,8 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     const x = i === 0 ? range.min : i === 6 ? range.max : roundSignificant(Math.round((range.min + (span * i) / 6) / unit) * unit, 15);
     return { x, y: evaluateFit(partial, x).y };
   });
-  const meanSquareSigma = sigmaV ? sigmaV.reduce((sum, s) => sum + s * s, 0) / n : 1;
+  // A new observation is taken to carry the RMS of the stated uncertainties (in the fitted space).
+  const meanSquareSigma = weighted ? weights.reduce((sum, w) => sum + 1 / w, 0) / n : 1;
 
   const warnings: string[] = [];
   if (dof < 2) warnings.push(`only ${dof} residual degree${dof === 1 ? '' : 's'} of freedom: the fit nearly interpolates the data`);

@@ -12,7 +12,10 @@ export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';
 export { domainMap, toUnit } from './domain.ts';
 export { mappedToPower, mappedCovarianceToPower } from './convertBasis.ts';
-export { forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+export { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+
+// Order selection (criteria, the default rule, the candidate-order table)
+export * from './order/index.ts';
 
 // Evaluation and bands
 export { evaluateFit, basisAt, horner, type Evaluation } from './evaluate.ts';

@@ -51,3 +51,19 @@ export function transformData(
   }
   return { u, v };
 }
+
+/**
+ * Weights w_i = 1/σ_v² in the fitted space from standard uncertainties σ of y. Under ln y the uncertainty is
+ * propagated to first order, σ_v = σ/|y| (GUM, JCGM 100:2008, §5.1.2).
+ * @throws FitError 'bad-uncertainty' naming the first point whose σ_v is not positive and finite
+ * @example fittedSpaceWeights([2, 4], [0.1, 0.2], 'log') // => [400, 400] (up to rounding)
+ */
+export function fittedSpaceWeights(y: readonly number[], uncertainty: readonly number[], transformY: TransformY): number[] {
+  return uncertainty.map((sigma, i) => {
+    const sigmaV = transformY === 'log' ? sigma / Math.abs(y[i]!) : sigma;
+    if (!(sigmaV > 0 && Number.isFinite(sigmaV))) {
+      throw new FitError('bad-uncertainty', `uncertainty ${sigma} is not a positive finite number`, i);
+    }
+    return 1 / (sigmaV * sigmaV);
+  });
+}

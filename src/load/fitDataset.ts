@@ -2,8 +2,7 @@
  * Fit a validated correlation: choose the order (or take the fixed one), then fit it with the pass-through
  * constraints. Core failures become file messages: a FitError naming a point points at that point's data line.
  */
-import { FitError, fitPolynomial, type FitData, type PolynomialFit } from '../core/index.ts';
-import { selectOrder, type OrderSelection } from '../core/order/index.ts';
+import { FitError, fitPolynomial, selectOrder, type FitData, type OrderSelection, type PolynomialFit } from '../core/index.ts';
 import { error, warning, type Diagnostic } from './diagnostic.ts';
 import type { LoadedCorrelation } from './types.ts';
 

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { orderCriteria } from '../../src/core/order/index.ts';
+import { orderCriteria } from '../../src/core/index.ts';
 import { CRITERIA, correlationMetaSchema, correlationEntrySchema, type CorrelationMetaInput } from '../../src/schema/index.ts';
 
 const MINIMAL: CorrelationMetaInput = Object.freeze({

@@ -16,7 +16,7 @@
  * // => { criterion: 'lowestJustified', order: 3, reason: 'Order 3: no higher order up to 6 improves …', orders: [...], … }
  */
 import { FitError } from '../fitError.ts';
-import { transformData } from '../transforms.ts';
+import { fittedSpaceWeights, transformData } from '../transforms.ts';
 import type { DomainMap, FitData, TransformX, TransformY } from '../types.ts';
 import { candidateTable } from './candidateTable.ts';
 import { fitOfOrder, formatNumber, type CriterionName } from './criterion.ts';
@@ -67,19 +67,13 @@ function weightsFor(data: FitData, transformY: TransformY): number[] | undefined
   if (data.uncertainty.length !== data.y.length) {
     throw new FitError('length-mismatch', 'selectOrder requires one uncertainty per point');
   }
-  return data.uncertainty.map((sigma, i) => {
-    const sigmaFitted = transformY === 'log' ? sigma / Math.abs(data.y[i]!) : sigma;
-    if (!(sigmaFitted > 0 && Number.isFinite(sigmaFitted))) {
-      throw new FitError('invalid-uncertainty', `uncertainty ${sigma} is not a positive finite number`, i);
-    }
-    return 1 / (sigmaFitted * sigmaFitted);
-  });
+  return fittedSpaceWeights(data.y, data.uncertainty, transformY);
 }
 
 /**
  * Select the polynomial order for one data set.
  * @throws FitError 'fixed-order-needs-reason', 'chi-square-needs-uncertainty', 'too-few-points',
- *   'order-too-high', 'length-mismatch', 'invalid-uncertainty', 'not-finite', or a transform-domain error
+ *   'order-too-high', 'length-mismatch', 'bad-uncertainty', 'not-finite', or a transform-domain error
  */
 export function selectOrder(data: FitData, options: SelectOrderOptions = {}): OrderSelection {
   const intercept = options.intercept ?? true;
