@@ -15,7 +15,7 @@ export interface FitChartData {
   readonly residualLabel: string;
   readonly confidence: number;
   readonly range: { readonly min: number; readonly max: number };
-  readonly points: readonly { readonly row: number; readonly x: number; readonly y: number; readonly residual: number }[];
+  readonly points: readonly { readonly row: number; readonly x: number; readonly y: number; readonly residual: number; readonly bar?: readonly [number, number] }[];
   readonly excluded: readonly { readonly row: number; readonly x: number; readonly y: number; readonly reason: string }[];
   readonly curve: readonly (readonly (number | null)[])[];
   readonly residualBands: readonly (readonly (number | null)[])[];
@@ -107,6 +107,7 @@ export function drawFitChart(container: HTMLElement, data: FitChartData): void {
     .range([MARGIN.left, WIDTH - MARGIN.right]);
   const ys = finite([
     ...data.points.map((point) => point.y),
+    ...data.points.flatMap((point) => point.bar ?? []),
     ...data.excluded.map((point) => point.y),
     ...data.curve.flatMap((row) => row.slice(1)),
   ]);
@@ -125,6 +126,17 @@ export function drawFitChart(container: HTMLElement, data: FitChartData): void {
     .x((row) => x(row[0]!))
     .y((row) => y(row[1]!));
   main.append('path').attr('d', curve(data.curve) ?? '').attr('fill', 'none').attr('stroke', COLORS.curve).attr('stroke-width', 2);
+  main
+    .append('g')
+    .selectAll('line')
+    .data(data.points.filter((point) => point.bar !== undefined))
+    .join('line')
+    .attr('x1', (point) => x(point.x))
+    .attr('x2', (point) => x(point.x))
+    .attr('y1', (point) => y(point.bar![0]))
+    .attr('y2', (point) => y(point.bar![1]))
+    .attr('stroke', COLORS.point)
+    .attr('stroke-width', 1);
   main
     .append('g')
     .selectAll('circle')

@@ -3,7 +3,16 @@
  * prediction bands on an even grid over the validity range, and the residuals. The client only draws this.
  */
 import { bands } from '../../core/index.ts';
-import { plainSymbol, unitSuffix, usedPoints, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
+import { labelSymbol, unitSuffix, usedPoints, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
+
+export interface ChartPoint {
+  readonly row: number;
+  readonly x: number;
+  readonly y: number;
+  readonly residual: number;
+  /** y − uncertainty and y + uncertainty, when the data file gives an uncertainty. */
+  readonly bar?: readonly [number, number];
+}
 
 export interface ChartData {
   readonly xLabel: string;
@@ -11,8 +20,8 @@ export interface ChartData {
   readonly residualLabel: string;
   readonly confidence: number;
   readonly range: { readonly min: number; readonly max: number };
-  /** Points used in the fit, with the residual y − ŷ in y's unit. */
-  readonly points: readonly { readonly row: number; readonly x: number; readonly y: number; readonly residual: number }[];
+  /** Points used in the fit, with the residual y − ŷ in y's unit and, when stated, the bar y ± uncertainty. */
+  readonly points: readonly ChartPoint[];
   /** Points left out of the fit. */
   readonly excluded: readonly { readonly row: number; readonly x: number; readonly y: number; readonly reason: string }[];
   /** Curve and bands: [x, y, confidence low, confidence high, prediction low, prediction high]; null where undefined. */
@@ -46,12 +55,18 @@ export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 2
   );
   const used = usedPoints(entry);
   return {
-    xLabel: `${variable.name}, ${plainSymbol(variable.symbol)}${unitSuffix(variable.unit) ? ` (${variable.unit})` : ''}`,
-    yLabel: `${property.name}, ${plainSymbol(property.symbol)}${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
+    xLabel: `${variable.name}, ${labelSymbol(variable.symbol)}${unitSuffix(variable.unit) ? ` (${variable.unit})` : ''}`,
+    yLabel: `${property.name}, ${labelSymbol(property.symbol)}${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
     residualLabel: `residual y − ŷ${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
     confidence: fit.confidence,
     range: entry.range,
-    points: used.map((point, i) => ({ row: point.row, x: point.x, y: point.y, residual: fit.points.residualsOriginal[i] ?? NaN })),
+    points: used.map((point, i) => ({
+      row: point.row,
+      x: point.x,
+      y: point.y,
+      residual: fit.points.residualsOriginal[i] ?? NaN,
+      ...(point.uncertainty === undefined ? {} : { bar: [point.y - point.uncertainty, point.y + point.uncertainty] as const }),
+    })),
     excluded: entry.excluded.map((point) => ({ row: point.row, x: point.x, y: point.y, reason: point.reason })),
     curve,
     residualBands,

@@ -38,6 +38,22 @@ export function plainSymbol(tex: string): string {
   return tex.replace(/\\[,;:! ]/g, ' ').replace(/\\([A-Za-z]+)/g, '$1').replace(/[{}]/g, '').replace(/\s+/g, ' ').trim();
 }
 
+const GREEK: Record<string, string> = {
+  alpha: 'α', beta: 'β', gamma: 'γ', delta: 'δ', epsilon: 'ϵ', varepsilon: 'ε', zeta: 'ζ', eta: 'η', theta: 'θ',
+  vartheta: 'ϑ', kappa: 'κ', lambda: 'λ', mu: 'μ', nu: 'ν', xi: 'ξ', pi: 'π', rho: 'ρ', sigma: 'σ', tau: 'τ',
+  phi: 'ϕ', varphi: 'φ', chi: 'χ', psi: 'ψ', omega: 'ω', Gamma: 'Γ', Delta: 'Δ', Theta: 'Θ', Lambda: 'Λ',
+  Xi: 'Ξ', Pi: 'Π', Sigma: 'Σ', Phi: 'Φ', Psi: 'Ψ', Omega: 'Ω',
+};
+
+/**
+ * A TeX symbol as text for chart labels: Greek commands become Greek letters, other commands lose their backslash.
+ * @example labelSymbol('\\varepsilon_{th}') // => "ε_th"
+ */
+export function labelSymbol(tex: string): string {
+  const greek = tex.replace(/\\([A-Za-z]+)/g, (whole, name: string) => GREEK[name] ?? whole);
+  return plainSymbol(greek.replace(/([Α-Ωα-ωϵϑϕ])\s+(?=[_^'])/g, '$1'));
+}
+
 /** "253.15 K ≤ T ≤ 373.15 K", with the symbol as plain text. */
 export function rangeText(entry: CorrelationEntry): string {
   const unit = unitSuffix(entry.meta.variable.unit);
