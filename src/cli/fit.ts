@@ -9,6 +9,7 @@ import {
   fitPolynomial,
   FitError,
   formatCoefficient,
+  formatP,
   type PolynomialFit,
   type TransformX,
   type TransformY,
@@ -211,7 +212,7 @@ function fitReport(fit: PolynomialFit, selection: OrderSelection, file: string, 
   lines.push(`  ${pad('m', 4)}${pad('s²', 14)}${pad('adj. R²', 14)}${pad('AICc', 12)}${pad('BIC', 12)}${pad('LOO RMSE', 14)}p (to m+1)`);
   for (const row of selection.orders) {
     const mark = row.order === fit.order ? '*' : ' ';
-    lines.push(`${mark} ${pad(String(row.order), 4)}${pad(number(row.residualVariance, 4), 14)}${pad(number(row.adjustedRSquared, 6), 14)}${pad(number(row.aicc, 5), 12)}${pad(number(row.bic, 5), 12)}${pad(number(row.looRmse, 4), 14)}${number(row.pToNext, 2)}`);
+    lines.push(`${mark} ${pad(String(row.order), 4)}${pad(number(row.residualVariance, 4), 14)}${pad(number(row.adjustedRSquared, 6), 14)}${pad(number(row.aicc, 5), 12)}${pad(number(row.bic, 5), 12)}${pad(number(row.looRmse, 4), 14)}${row.pToNext === null ? '—' : formatP(row.pToNext)}`);
   }
   lines.push('');
   lines.push('Check values (evaluate your copy of the equation here):');

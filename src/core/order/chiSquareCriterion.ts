@@ -18,7 +18,7 @@
  */
 import { chiSquareQuantile, chiSquareUpperP } from '../distributions.ts';
 import { argminOrder } from './argminOrder.ts';
-import { fitOfOrder, formatNumber, formatP, type CandidateTable, type OrderCriterion } from './criterion.ts';
+import { fitOfOrder, formatNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
 
 /** Confidence level of the χ² acceptance bound. */
 export const CHI_SQUARE_LEVEL = 0.95;
@@ -80,9 +80,9 @@ export function createChiSquareCriterion(minResidualDof: number): OrderCriterion
       const p = chiSquareUpperP(chiSquare, fit.degreesOfFreedom);
       if (chiSquare <= bound) {
         const lowerNote = order > table.minCandidate ? `, and order ${order - 1} is not (χ² = ${formatNumber(fitOfOrder(table, order - 1).residualSumOfSquares)})` : '';
-        return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${formatNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${formatNumber(bound)} (p = ${formatP(p)})${lowerNote}.`;
+        return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${formatNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${formatNumber(bound)} (${pText(p)})${lowerNote}.`;
       }
-      return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${formatNumber(chiSquare / fit.degreesOfFreedom)} (p = ${formatP(p)}).`;
+      return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${formatNumber(chiSquare / fit.degreesOfFreedom)} (${pText(p)}).`;
     },
   };
 }

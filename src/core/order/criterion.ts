@@ -93,3 +93,8 @@ export function formatP(p: number): string {
   if (p < 1e-4) return '< 0.0001';
   return String(Number(p.toPrecision(2)));
 }
+
+/** "p = 0.38" or "p < 0.0001", for reason sentences. */
+export function pText(p: number): string {
+  return p < 1e-4 ? 'p < 0.0001' : `p = ${formatP(p)}`;
+}

@@ -15,6 +15,8 @@ export { candidateTable, type CandidateRange } from './candidateTable.ts';
 // criteria: interface, registry, default
 export {
   fitOfOrder,
+  formatP,
+  pText,
   residualVarianceOf,
   type CandidateTable,
   type CriterionName,
