@@ -6,7 +6,7 @@
  * site, and must match the downloads to the last bit: JSON numbers and CSV fields are shortest round-trip text.
  */
 import { existsSync } from 'node:fs';
-import { readFile, rm } from 'node:fs/promises';
+import { readFile, readdir, rm } from 'node:fs/promises';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTIONS, cautionsFor, fitPolynomial, type PolynomialFit } from '../../src/core/index.ts';
@@ -148,6 +148,33 @@ describe('astro build of the demo handbook', () => {
       const values = table.slice(1).map((line) => Number(line.split(',')[1]));
       expect(values.length).toBe(fit.coefficients.length);
       values.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}`).toBe(true));
+    }
+  });
+});
+
+describe('the browser only draws', () => {
+  it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape and its own files', async () => {
+    const directory = path.join(projectRoot, 'src', 'client');
+    const offenders: string[] = [];
+    for (const name of await readdir(directory)) {
+      const text = await readFile(path.join(directory, name), 'utf8');
+      for (const match of text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
+        const spec = (match[1] ?? match[2])!;
+        if (!(spec.startsWith('./') || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape'].includes(spec))) offenders.push(`${name} imports ${spec}`);
+      }
+    }
+    expect(offenders).toEqual([]);
+  });
+
+  it('the built browser scripts hold none of the numerical core', async () => {
+    const assets = path.join(outDir, '_astro');
+    const scripts = (await readdir(assets)).filter((name) => name.endsWith('.js'));
+    expect(scripts.length).toBeGreaterThan(0);
+    for (const name of scripts) {
+      const text = await readFile(path.join(assets, name), 'utf8');
+      // String literals of the core survive minification: the solver tag and the range guard's message.
+      expect(text, name).not.toContain('householder-qr');
+      expect(text, name).not.toContain('outside the fitted range');
     }
   });
 });
