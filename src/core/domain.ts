@@ -23,3 +23,15 @@ export function domainMap(values: readonly number[]): DomainMap {
 export function toUnit(map: DomainMap, u: number): number {
   return (u - map.center) / map.halfWidth;
 }
+
+/**
+ * The map a polynomial fit uses: onto [−1, 1] with an intercept; without one, scaling only (center 0,
+ * halfWidth = max|u|), because a model without intercept must keep u = 0 at t = 0.
+ * @example domainMapFor([-2, 4], false) // => { center: 0, halfWidth: 4 }
+ */
+export function domainMapFor(values: readonly number[], intercept: boolean): DomainMap {
+  if (intercept) return domainMap(values);
+  let largest = 0;
+  for (const value of values) largest = Math.max(largest, Math.abs(value));
+  return { center: 0, halfWidth: largest > 0 ? largest : 1 };
+}

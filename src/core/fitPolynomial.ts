@@ -16,7 +16,7 @@
  * @throws FitError when the data cannot support the requested fit (too few distinct x, rank deficiency, …)
  */
 import { Matrix } from 'ml-matrix';
-import { domainMap, toUnit } from './domain.ts';
+import { domainMapFor, toUnit } from './domain.ts';
 import { mappedCovarianceToPower, mappedToPower } from './convertBasis.ts';
 import { chiSquareUpperP, tQuantile } from './distributions.ts';
 import { evaluateFit } from './evaluate.ts';
@@ -64,8 +64,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     }
   });
 
-  // Without an intercept the model must keep u = 0 at t = 0, so the map only scales.
-  const map = intercept ? domainMap(u) : { center: 0, halfWidth: Math.max(Math.abs(uMin), Math.abs(uMax)) };
+  const map = domainMapFor(u, intercept);
   const t = u.map((value) => toUnit(map, value));
   const A = design(t, powers, rootWeights);
   const constraintMatrix = design(cu.map((value) => toUnit(map, value)), powers);

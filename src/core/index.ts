@@ -10,7 +10,7 @@ export { fitPolynomial } from './fitPolynomial.ts';
 export { fitOrders, type OrderFit } from './fitOrders.ts';
 export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';
-export { domainMap, toUnit } from './domain.ts';
+export { domainMap, domainMapFor, toUnit } from './domain.ts';
 export { mappedToPower, mappedCovarianceToPower } from './convertBasis.ts';
 export { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
 

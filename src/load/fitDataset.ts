@@ -40,6 +40,7 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
     transformX: fitSettings.transform.x,
     transformY: fitSettings.transform.y,
   };
+  const constraints = fitSettings.passThrough.map((point) => ({ x: point.x, y: point.y }));
   const diagnostics: Diagnostic[] = [];
   let selection: OrderSelection | undefined;
   let fit: PolynomialFit | undefined;
@@ -49,24 +50,12 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
       maxOrder: fitSettings.maxOrder,
       ...(fitSettings.criterion === undefined ? {} : { criterion: fitSettings.criterion }),
       ...(typeof fitSettings.order === 'number' ? { fixedOrder: fitSettings.order, reason: fitSettings.reason ?? '' } : {}),
+      constraints,
     });
-    // The order selector does not see pass-through points; an order they would pin down completely is refused.
-    const free = (fitSettings.intercept ? selection.order + 1 : selection.order) - fitSettings.passThrough.length;
-    if (free < 1) {
-      diagnostics.push(
-        error(
-          correlation.metadataPath,
-          correlation.orderPosition,
-          `order ${selection.order} (${selection.criterion}) leaves no free coefficient after ${fitSettings.passThrough.length} pass-through points`,
-          'fix the order with fit.order and fit.reason, or use fewer pass-through points',
-        ),
-      );
-      return { fit: undefined, selection, diagnostics };
-    }
     fit = fitPolynomial(data, {
       ...common,
       order: selection.order,
-      constraints: fitSettings.passThrough.map((point) => ({ x: point.x, y: point.y })),
+      constraints,
     });
   } catch (caught) {
     if (caught instanceof FitError) diagnostics.push(fitErrorDiagnostic(correlation, caught));

@@ -47,12 +47,12 @@ describe('fitDataset(correlation)', () => {
     ]);
   });
 
-  it('fitDataset refuses an automatic order that the pass-through points fix completely', async () => {
+  it('fitDataset refuses when the pass-through points fix every candidate order completely', async () => {
     const folder = 'test/fixtures/content/constraints-fix-all/liquid-a';
     const loaded = await readDataset(folder);
     expect(loaded.diagnostics).toEqual([]);
     expect(fitDataset(loaded.correlation!).diagnostics.map(formatDiagnostic)).toEqual([
-      `${folder}/correlation.yaml:24:3: order 1 (lowestJustified) leaves no free coefficient after 2 pass-through points; fix the order with fit.order and fit.reason, or use fewer pass-through points`,
+      `${folder}/correlation.yaml:24:3: cannot fit: 2 pass-through points leave no free coefficient at any candidate order up to 1`,
     ]);
   });
 });

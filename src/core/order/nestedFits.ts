@@ -30,6 +30,7 @@
  * Cost: O(n P²) for the QR plus O(n P) per order, P = M + 1 columns.
  */
 import { Matrix, QrDecomposition } from 'ml-matrix';
+import { domainMapFor } from '../domain.ts';
 import { FitError } from '../fitError.ts';
 import type { DomainMap } from '../types.ts';
 
@@ -197,21 +198,6 @@ export function fitNestedOrders(u: readonly number[], v: readonly number[], opti
   return { n, intercept, weighted: sqrtWeights !== null, map, totalSumOfSquares, residualFloor, fits };
 }
 
-/** Map u onto [−1, 1] (centre and half-width of the data); without intercept scale only, by max|u|. */
-function domainMapFor(u: readonly number[], intercept: boolean): DomainMap {
-  let min = Infinity;
-  let max = -Infinity;
-  for (const value of u) {
-    min = Math.min(min, value);
-    max = Math.max(max, value);
-  }
-  if (!intercept) {
-    const halfWidth = Math.max(Math.abs(min), Math.abs(max));
-    return { center: 0, halfWidth: halfWidth > 0 ? halfWidth : 1 };
-  }
-  const halfWidth = (max - min) / 2;
-  return { center: (max + min) / 2, halfWidth: halfWidth > 0 ? halfWidth : 1 };
-}
 
 /** Solve the leading p×p block of R for the mapped coefficients; pad t⁰ with 0 when there is no intercept. */
 function backSubstitute(r: number[][], projections: readonly number[], p: number, firstPower: number): number[] {

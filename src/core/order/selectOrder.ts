@@ -16,12 +16,13 @@
  * // => { criterion: 'lowestJustified', order: 3, reason: 'Order 3: no higher order up to 6 improves …', orders: [...], … }
  */
 import { FitError } from '../fitError.ts';
-import { fittedSpaceWeights, transformData } from '../transforms.ts';
-import type { DomainMap, FitData, TransformX, TransformY } from '../types.ts';
+import { fittedSpaceWeights, forwardX, forwardY, transformData } from '../transforms.ts';
+import type { DomainMap, FitData, PointConstraint, TransformX, TransformY } from '../types.ts';
 import { candidateTable } from './candidateTable.ts';
 import { fitOfOrder, formatNumber, type CriterionName } from './criterion.ts';
 import { isFlat } from './isFlat.ts';
 import { DEFAULT_MAX_ORDER, maxCandidateOrder } from './maxCandidateOrder.ts';
+import { fitConstrainedOrders } from './constrainedFits.ts';
 import { fitNestedOrders } from './nestedFits.ts';
 import { lowestJustifiedCriterion } from './lowestJustifiedCriterion.ts';
 import { DEFAULT_CRITERION, orderCriteria } from './orderCriteria.ts';
@@ -40,6 +41,8 @@ export interface SelectOrderOptions {
   readonly fixedOrder?: number;
   /** The author's reason for a fixed order, published with it. */
   readonly reason?: string;
+  /** Points (in the user's x and y) the curve must pass through; candidate orders are fitted under them. */
+  readonly constraints?: readonly PointConstraint[];
 }
 
 export interface OrderSelection {
@@ -116,8 +119,15 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
     fitMax = Math.max(fitMax, fixed);
   }
 
-  const nested = fitNestedOrders(u, v, { maxOrder: fitMax, intercept, weights });
-  const table = candidateTable(nested, { maxCandidate, uncertaintyGiven });
+  const constraints = (options.constraints ?? []).map((c) => ({ u: forwardX(transformX, c.x), v: forwardY(transformY, c.y) }));
+  const nested = constraints.length
+    ? fitConstrainedOrders(u, v, { maxOrder: fitMax, intercept, weights, constraints })
+    : fitNestedOrders(u, v, { maxOrder: fitMax, intercept, weights });
+  const firstOrder = nested.fits[0]!.order;
+  if (options.fixedOrder !== undefined && options.fixedOrder < firstOrder) {
+    throw new FitError('constraints-fix-all', `the pass-through points fix every coefficient of an order-${options.fixedOrder} curve; nothing is left to fit`);
+  }
+  const table = candidateTable(nested, { maxCandidate, uncertaintyGiven, minCandidate: Math.max(1, firstOrder) });
   const warnings: string[] = [];
 
   let chosenOrder: number;
@@ -155,7 +165,7 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
     }
   }
 
-  const rows = orderRows(nested, (order) => order >= 1 && order <= maxCandidate);
+  const rows = orderRows(nested, (order) => order >= Math.max(1, firstOrder) && order <= maxCandidate);
   return {
     criterion: options.fixedOrder !== undefined ? 'fixed' : criterionName,
     order: chosenOrder,
