@@ -130,7 +130,7 @@ export async function runFit(args: readonly string[], out: (text: string) => voi
     if (error instanceof FitError) throw describeFitError(error, options.file, table);
     throw error;
   }
-  const cautions = cautionsFor(fit.range);
+  const cautions = cautionsFor(fit.range, '', table.columns.x);
   if (options.json) {
     out(JSON.stringify(fitJson(fit, selection, options.file, table, cautions), null, 2));
   } else {

@@ -113,7 +113,7 @@ describe('astro build of the demo handbook', () => {
       const text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8');
       const json = JSON.parse(text);
       const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
-      expect(json.cautions).toEqual(cautionsFor(correlation.range, unit));
+      expect(json.cautions).toEqual(cautionsFor(correlation.range, unit, correlation.meta.variable.name));
       expect(json.cautions).toContain(CAUTIONS[1]);
       expect(json.validityRange).toEqual({ ...correlation.range, unit: correlation.meta.variable.unit });
       expect(json.invented).toBe(correlation.meta.invented);
@@ -140,7 +140,7 @@ describe('astro build of the demo handbook', () => {
       const table = lines.filter((line) => !line.startsWith('#'));
       expect(lines.slice(0, comments.length).every((line) => line.startsWith('#')), 'comments come first').toBe(true);
       const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
-      for (const caution of cautionsFor(correlation.range, unit)) expect(comments).toContain(`# CAUTION: ${caution}`);
+      for (const caution of cautionsFor(correlation.range, unit, correlation.meta.variable.name)) expect(comments).toContain(`# CAUTION: ${caution}`);
       expect(comments.some((line) => line.startsWith('# INVENTED DATA:'))).toBe(correlation.meta.invented);
       expect(table[0]).toBe('k,coefficient,significant_digits,rounded,standard_error,ci95_low,ci95_high');
       const json = JSON.parse(await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8'));

@@ -40,7 +40,7 @@ export function coefficientsJson(entry: CorrelationEntry) {
   return {
     ...(meta.invented ? { notice: INVENTED_NOTICE } : {}),
     invented: meta.invented,
-    cautions: cautionsFor(entry.range, meta.variable.unit === '1' ? '' : meta.variable.unit),
+    cautions: cautionsFor(entry.range, meta.variable.unit === '1' ? '' : meta.variable.unit, meta.variable.name),
     title: meta.title,
     slug: entry.slug,
     property: meta.property,

@@ -4,7 +4,7 @@
  * OrderSelection, so the pages read them through these casts in one place.
  */
 import type { PolynomialFit } from '../../core/index.ts';
-import type { OrderSelection } from '../../core/order/index.ts';
+import type { OrderSelection } from '../../core/index.ts';
 import type { CorrelationEntry, DataPoint } from '../../schema/index.ts';
 
 export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection };

@@ -7,11 +7,15 @@ export const CAUTIONS: readonly string[] = [
   'Not for design use without checking against the applicable codes and standards and the judgement of a qualified engineer.',
 ];
 
-/** The cautions for one fit, naming its range. */
-export function cautionsFor(range: { readonly min: number; readonly max: number }, unit = ''): string[] {
+/**
+ * The cautions for one fit, naming its range, e.g. "Valid only for 250 K ≤ T ≤ 900 K (the fitted range); …".
+ * @param unit unit of the independent variable ('' for none)
+ * @param variable its symbol as plain text (default 'x')
+ */
+export function cautionsFor(range: { readonly min: number; readonly max: number }, unit = '', variable = 'x'): string[] {
   const suffix = unit ? ` ${unit}` : '';
   return [
-    `Valid only for ${range.min}${suffix} ≤ x ≤ ${range.max}${suffix} (the fitted range); outside it the correlation is an extrapolation and may be badly wrong.`,
+    `Valid only for ${range.min}${suffix} ≤ ${variable} ≤ ${range.max}${suffix} (the fitted range); outside it the correlation is an extrapolation and may be badly wrong.`,
     CAUTIONS[1]!,
   ];
 }
