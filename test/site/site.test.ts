@@ -183,7 +183,12 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
   it('draws points, curve, bands and residuals from the embedded data, and shows a tooltip on hover', async () => {
     const { chromium } = await import('playwright-core');
     const server = await serveDirectory(outDir);
-    const browser = await chromium.launch({ executablePath: CHROMIUM, args: ['--no-sandbox'] });
+    const browser = await chromium.launch({
+      executablePath: CHROMIUM,
+      headless: true,
+      // Without the background-networking flags Chromium keeps trying hosts this closed network refuses.
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+    });
     try {
       const target = correlations.find((correlation) => correlation.excluded.length > 0) ?? correlations[0]!;
       const browserPage = await browser.newPage({ viewport: { width: 1280, height: 900 } });
