@@ -105,6 +105,9 @@ function describeFitError(error: FitError, file: string, table: FitTable): CliEr
 /** Run the command; returns the exit status. */
 export async function runFit(args: readonly string[], out: (text: string) => void = console.log): Promise<number> {
   const options = parseFitArguments(args);
+  if (options.criterion === 'chiSquare' && options.uncertainty === undefined) {
+    throw new CliError('--criterion chiSquare needs per-point uncertainties: name their column with --uncertainty COL', 2);
+  }
   const table = await readFitTable(options.file, options);
   const data = { x: table.x, y: table.y, uncertainty: table.uncertainty };
   let selection: OrderSelection;

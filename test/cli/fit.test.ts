@@ -89,6 +89,13 @@ describe('correlary fit bad input', () => {
     });
   }
 
+  it('correlary fit --criterion chiSquare without --uncertainty says which option is missing', async () => {
+    const file = csvFile('chi.csv', 'x,y\n1,2\n2,3\n3,5\n4,4\n');
+    const { code, stderr } = await runCli(['fit', file, '--criterion', 'chiSquare']);
+    expect(code).toBe(2);
+    expect(stderr).toBe('correlary: --criterion chiSquare needs per-point uncertainties: name their column with --uncertainty COL');
+  });
+
   it('correlary fit reports a missing file in one line', async () => {
     const { code, stderr } = await runCli(['fit', join(dir, 'nope.csv')]);
     expect(code).toBe(1);
