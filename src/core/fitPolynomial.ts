@@ -38,7 +38,7 @@ function design(values: readonly number[], powers: readonly number[], rowScale?:
 
 
 export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit {
-  const { order, intercept, transformX, transformY, constraints, confidence } = validateFitInput(data, options);
+  const { order, intercept, transformX, transformY, constraints, confidence, range } = validateFitInput(data, options);
   const n = data.x.length;
   const { u, v } = transformData(data.x, data.y, transformX, transformY);
   const weighted = data.uncertainty !== undefined;
@@ -56,13 +56,11 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   }
   const cu = constraints.map((c) => forwardX(transformX, c.x));
   const cv = constraints.map((c) => forwardY(transformY, c.y));
-  const uMin = Math.min(...u);
-  const uMax = Math.max(...u);
-  cu.forEach((value, i) => {
-    if (value < uMin || value > uMax) {
-      throw new FitError('constraint-outside-range', `the constraint at x = ${constraints[i]!.x} is outside the data range`);
+  for (const c of constraints) {
+    if (c.x < range.min || c.x > range.max) {
+      throw new FitError('constraint-outside-range', `the constraint at x = ${c.x} is outside the validity range [${range.min}, ${range.max}]`);
     }
-  });
+  }
 
   const map = domainMapFor(u, intercept);
   const t = u.map((value) => toUnit(map, value));
@@ -130,11 +128,12 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const unweightedSd = dof > 0 ? Math.sqrt(residuals.reduce((sum, r) => sum + r * r, 0) / dof) : 0;
   const digitTolerance = Math.max(0.01 * unweightedSd, 1e-13 * scaleV) || 1e-300;
 
-  const range = { min: Math.min(...data.x), max: Math.max(...data.x) };
   const partial = { transformX, transformY, mapped: { map, coefficients: mappedCoefficients, covariance: mappedCovariance }, range, order };
   // Seven check points: both range ends exactly, interior points rounded to a short decimal (easy to type).
   const span = range.max - range.min;
   const unit = 10 ** (Math.floor(Math.log10(span)) - 2);
+  const uLow = forwardX(transformX, range.min);
+  const uHigh = forwardX(transformX, range.max);
   const checkValues = Array.from({ length: 7 }, (_, i) => {
     const x = i === 0 ? range.min : i === 6 ? range.max : roundSignificant(Math.round((range.min + (span * i) / 6) / unit) * unit, 15);
     return { x, y: evaluateFit(partial, x).y };
@@ -162,7 +161,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     confidenceIntervals,
     covariance,
     mapped: partial.mapped,
-    significantDigits: significantDigits(coefficients, Math.min(...u), Math.max(...u), digitTolerance),
+    significantDigits: significantDigits(coefficients, Math.min(uLow, uHigh), Math.max(uLow, uHigh), digitTolerance),
     checkValues,
     confidence,
     predictionScale: meanSquareSigma,

@@ -38,6 +38,11 @@ export interface FitOptions {
   readonly transformY?: TransformY;
   /** Equality constraints: the curve passes through these points. */
   readonly constraints?: readonly PointConstraint[];
+  /**
+   * Published validity range in the user's x; default the x range of the data. It may narrow that range, never
+   * widen it. The range guard, the check values and the digit count all use it.
+   */
+  readonly range?: { readonly min: number; readonly max: number };
   /** Confidence level for intervals and bands, in (0, 1); default 0.95. */
   readonly confidence?: number;
   /**
@@ -139,7 +144,7 @@ export interface PolynomialFit {
   readonly transformY: TransformY;
   readonly weighted: boolean;
   readonly constraints: readonly PointConstraint[];
-  /** Validity range in the user's x. */
+  /** Validity range in the user's x: the data's x range, or the narrower range asked for. */
   readonly range: { readonly min: number; readonly max: number };
   /** Ascending power-basis coefficients in u (the transformed x): v = Σ a_k u^k. */
   readonly coefficients: readonly number[];

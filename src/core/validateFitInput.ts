@@ -12,6 +12,7 @@ export interface ValidatedOptions {
   readonly transformY: TransformY;
   readonly constraints: readonly PointConstraint[];
   readonly confidence: number;
+  readonly range: { readonly min: number; readonly max: number };
 }
 
 /**
@@ -57,7 +58,21 @@ export function validateFitInput(data: FitData, options: FitOptions): ValidatedO
   }
   const needed = coefficients - constraints.length;
   if (n < Math.max(1, needed)) throw new FitError('too-few-points', `order ${order} needs at least ${needed} points, the data have ${n}`);
+  let xMin = Infinity;
+  let xMax = -Infinity;
+  for (const value of data.x) {
+    xMin = Math.min(xMin, value);
+    xMax = Math.max(xMax, value);
+  }
+  const range = options.range ?? { min: xMin, max: xMax };
+  if (!(range.min < range.max) || range.min < xMin || range.max > xMax) {
+    throw new FitError(
+      'range-widened',
+      `the validity range [${range.min}, ${range.max}] must be a non-empty part of the data's x range [${xMin}, ${xMax}]; it can be narrowed, never widened`,
+    );
+  }
   return {
+    range: { min: range.min, max: range.max },
     order,
     intercept,
     transformX: options.transformX ?? 'identity',

@@ -56,6 +56,7 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
       ...common,
       order: selection.order,
       constraints,
+      range: correlation.range,
     });
   } catch (caught) {
     if (caught instanceof FitError) diagnostics.push(fitErrorDiagnostic(correlation, caught));

@@ -213,3 +213,24 @@ describe('fitPolynomial constraint count', () => {
     );
   });
 });
+
+describe('fitPolynomial validity range', () => {
+  const x = freeze([300, 320, 340, 360, 380, 400, 420, 440]);
+  const y = freeze(x.map((t) => 1000 - 0.8 * t - 1e-3 * t * t));
+
+  it('fitPolynomial narrows the validity range on request: guard, check values and ends follow it', () => {
+    const fit = fitPolynomial({ x, y }, { order: 2, range: { min: 300, max: 410 } });
+    expect(fit.range).toEqual({ min: 300, max: 410 });
+    expect(fit.checkValues[0]!.x).toBe(300);
+    expect(fit.checkValues.at(-1)!.x).toBe(410);
+    expect(fit.checkValues.every((check) => check.x >= 300 && check.x <= 410)).toBe(true);
+    expect(() => evaluateFit(fit, 430)).toThrowError(/outside the fitted range \[300, 410\]/);
+  });
+
+  it('fitPolynomial refuses a validity range wider than the data, and a constraint outside it', () => {
+    expect(() => fitPolynomial({ x, y }, { order: 2, range: { min: 290, max: 440 } })).toThrowError(/can be narrowed, never widened/);
+    expect(() => fitPolynomial({ x, y }, { order: 2, range: { min: 300, max: 400 }, constraints: [{ x: 420, y: 487.6 }] })).toThrowError(
+      /constraint at x = 420 is outside the validity range \[300, 400\]/,
+    );
+  });
+});

@@ -53,6 +53,7 @@ function expectedFit(correlation: LoadedCorrelation, order: number): PolynomialF
       transformX: settings.transform.x,
       transformY: settings.transform.y,
       constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
+      range: correlation.range,
     },
   );
 }
