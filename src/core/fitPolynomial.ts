@@ -3,9 +3,10 @@
  *
  * The solve is a Householder QR of the weighted design matrix in the mapped variable t = (u − c)/h ∈ [−1, 1]
  * (never the normal equations in floating point), with column equilibration, an SVD rank/condition guard, and
- * the null-space method for equality constraints (see leastSquares.ts). When the fit has no transform, the
- * coefficients and their statistics are then certified in exact rational arithmetic from the decimal inputs
- * (see exact/exactLeastSquares.ts), so every printed digit is right however ill-conditioned the power basis is.
+ * the null-space method for equality constraints (see leastSquares.ts). The coefficients and their statistics
+ * are then certified in exact rational arithmetic (see exact/exactLeastSquares.ts) from the decimal inputs — or,
+ * under a transform, from the transformed values as computed — so every printed digit is right however
+ * ill-conditioned the power basis is.
  *
  * Weights: a standard uncertainty σ_i of y gives w_i = 1/σ_i²; under ln y it is propagated as σ_i/y_i.
  * Standard errors are scaled by the residual variance (s²·(XᵀWX)⁻¹), as in the NIST StRD certified values.
@@ -100,7 +101,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     rSquared: summary.rSquared,
   };
   let refinement: 'exact-rational' | 'none' = 'none';
-  if (options.exact !== 'off' && transformX === 'identity' && transformY === 'identity') {
+  if (options.exact !== 'off') {
     const exact = exactLeastSquares({ u, v, weights: weighted ? weights : undefined, order, intercept, constraints: cu.map((value, i) => ({ u: value, v: cv[i]! })) });
     if (exact) {
       coefficients = exact.coefficients;
@@ -144,7 +145,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const warnings: string[] = [];
   if (dof < 2) warnings.push(`only ${dof} residual degree${dof === 1 ? '' : 's'} of freedom: the fit nearly interpolates the data`);
   if (solution.condition > 1e10) warnings.push(`the mapped design matrix is ill-conditioned (condition number ${solution.condition.toPrecision(3)})`);
-  if (refinement === 'none' && transformX === 'identity' && transformY === 'identity' && options.exact !== 'off') {
+  if (refinement === 'none' && options.exact !== 'off') {
     warnings.push('exact certification failed; the floating-point solution is reported');
   }
 

@@ -46,8 +46,9 @@ export interface FitOptions {
   /** Confidence level for intervals and bands, in (0, 1); default 0.95. */
   readonly confidence?: number;
   /**
-   * Exact rational certification of the coefficients and their statistics (default 'auto': used when the fit
-   * has no transform, so that the inputs are the decimals the user wrote). 'off' keeps the floating solution.
+   * Exact rational certification of the coefficients and their statistics (default 'auto'). Without transforms
+   * the inputs are the decimals the user wrote; under a transform, the transformed values as computed (the
+   * transform's own rounding, half an ulp, is then part of the data). 'off' keeps the floating-point solution.
    */
   readonly exact?: 'auto' | 'off';
 }
