@@ -1,13 +1,13 @@
 /**
  * Reads the CSV given to `correlary fit` with the handbook's own reader (src/load: readText → readCsv →
  * tableToPoints), so `fit` and `check` word their messages the same way. Columns are picked by name, or the
- * first two are x and y when none is named. The first error is reported as one `file:line:column: problem` line.
+ * first two are x and y when none is named; with no column named, a file without a header row is read as data. The first error is reported as one `file:line:column: problem` line.
  * The file is only read, never written.
  */
 import { resolve } from 'node:path';
 import { formatDiagnostic, sortDiagnostics, type Diagnostic } from '../load/index.ts';
 import { DATA_FILE_LIMIT_BYTES } from '../load/limits.ts';
-import { readCsv } from '../load/readCsv.ts';
+import { readCsv, type CsvTable } from '../load/readCsv.ts';
 import { readText } from '../load/readText.ts';
 import { tableToPoints } from '../load/tableToPoints.ts';
 import { CliError } from './cliError.ts';
@@ -26,6 +26,21 @@ function firstError(diagnostics: readonly Diagnostic[]): CliError | undefined {
   return first ? new CliError(formatDiagnostic(first)) : undefined;
 }
 
+const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/**
+ * A table whose first row is all numbers has no header: with no column named, `fit` reads it as data and calls
+ * the columns 'column 1', 'column 2', … (x is the first, y the second). Any other table is returned unchanged.
+ */
+function withoutHeader(table: CsvTable): CsvTable {
+  if (!table.header.every((cell) => NUMBER.test(cell.text))) return table;
+  return {
+    headerLine: table.headerLine,
+    header: table.header.map((cell, index) => ({ ...cell, text: `column ${index + 1}` })),
+    rows: [{ row: 1, line: table.headerLine, cells: table.header }, ...table.rows.map((row) => ({ ...row, row: row.row + 1 }))],
+  };
+}
+
 export async function readFitTable(
   file: string,
   names: { readonly x?: string | undefined; readonly y?: string | undefined; readonly uncertainty?: string | undefined },
@@ -38,8 +53,9 @@ export async function readFitTable(
   }
   if (!read.ok) throw new CliError(formatDiagnostic(read.diagnostic));
   const parsed = readCsv(read.text, file);
-  const table = parsed.table;
-  if (table === undefined) throw firstError(parsed.diagnostics) ?? new CliError(`${file}: cannot read the table`);
+  const parsedTable = parsed.table;
+  if (parsedTable === undefined) throw firstError(parsed.diagnostics) ?? new CliError(`${file}: cannot read the table`);
+  const table = names.x === undefined && names.y === undefined ? withoutHeader(parsedTable) : parsedTable;
   const header = table.header.map((cell) => cell.text);
   const x = names.x ?? header[0] ?? '';
   const y = names.y ?? header.find((name) => name !== x) ?? '';

@@ -96,6 +96,20 @@ describe('correlary fit bad input', () => {
     expect(stderr).toBe('correlary: --criterion chiSquare needs per-point uncertainties: name their column with --uncertainty COL');
   });
 
+  it('correlary fit reads a two-column file without a header row as x then y when no column is named', async () => {
+    const file = csvFile('noheader.csv', '1,1\n2,4\n3,9\n4,16\n5,25\n');
+    const { code, stdout } = await runCli(['fit', file, '--order', '2', '--json']);
+    expect(code).toBe(0);
+    const result = JSON.parse(stdout);
+    expect(result.n).toBe(5);
+    expect(result.coefficients).toEqual([0, 0, 1]); // y = x², exact
+    expect(result.columns).toEqual({ x: 'column 1', y: 'column 2' });
+    // Naming a column means the file must have a header naming it.
+    const named = await runCli(['fit', file, '--x', 'T', '--y', 'cp']);
+    expect(named.code).toBe(1);
+    expect(named.stderr).toMatch(/noheader\.csv:1:1: no header row: the first row holds numbers/);
+  });
+
   it('correlary fit reports a missing file in one line', async () => {
     const { code, stderr } = await runCli(['fit', join(dir, 'nope.csv')]);
     expect(code).toBe(1);
