@@ -4,7 +4,7 @@
  * Exit status: 0 when there are no errors (warnings allowed), 1 otherwise, 2 on bad usage.
  */
 import { stat } from 'node:fs/promises';
-import { fitDataset, formatDiagnostic, readHandbook, sortDiagnostics, type Diagnostic } from '../load/index.ts';
+import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import type { PolynomialFit } from '../core/index.ts';
 import { CliError } from './cliError.ts';
 
@@ -37,18 +37,14 @@ export async function runCheck(args: string[]): Promise<number> {
   const info = await stat(directory).catch(() => undefined);
   if (info === undefined || !info.isDirectory()) throw new CliError(`check requires a directory; '${directory}' is not one`, 2);
 
-  const handbook = await readHandbook(directory);
-  const messages: Diagnostic[] = [...handbook.diagnostics];
+  const handbook = await fitHandbook(directory);
   const summaries: string[] = [];
-  for (const dataset of handbook.datasets) {
-    messages.push(...dataset.diagnostics);
-    if (dataset.correlation === undefined) {
+  for (const { dataset, fitted } of handbook.datasets) {
+    if (dataset.correlation === undefined || fitted === undefined) {
       const count = dataset.diagnostics.filter((diagnostic) => diagnostic.severity === 'error').length;
       summaries.push(`${dataset.slug}: not fitted, ${count} error${count === 1 ? '' : 's'}`);
       continue;
     }
-    const fitted = fitDataset(dataset.correlation);
-    messages.push(...fitted.diagnostics);
     if (fitted.fit === undefined || fitted.selection === undefined) {
       summaries.push(`${dataset.slug}: not fitted, the fit failed`);
       continue;
@@ -56,7 +52,7 @@ export async function runCheck(args: string[]): Promise<number> {
     summaries.push(summaryLine(dataset.slug, fitted.fit, fitted.selection.criterion, dataset.correlation.meta.property.unit));
   }
 
-  const sorted = sortDiagnostics(messages);
+  const sorted = handbook.diagnostics;
   for (const message of sorted) console.log(formatDiagnostic(message));
   for (const summary of summaries) console.log(summary);
   const errors = sorted.filter((message) => message.severity === 'error').length;

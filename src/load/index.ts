@@ -9,6 +9,7 @@ export type { DatasetResult, LoadedCorrelation } from './types.ts';
 
 // fitting a loaded correlation
 export { fitDataset, type DatasetFit } from './fitDataset.ts';
+export { fitHandbook, type FittedDataset, type FittedHandbook } from './fitHandbook.ts';
 
 // messages
 export { formatDiagnostic, sortDiagnostics, hasErrors, error, warning, type Diagnostic, type Position } from './diagnostic.ts';

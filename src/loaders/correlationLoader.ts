@@ -9,7 +9,7 @@
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Loader, LoaderContext } from 'astro/loaders';
-import { fitDataset, formatDiagnostic, readHandbook, sortDiagnostics, type Diagnostic } from '../load/index.ts';
+import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -20,15 +20,11 @@ export interface CorrelationLoaderOptions {
 /** Read, validate and fit every correlation, then replace the collection's entries. */
 async function loadAll(context: LoaderContext, absoluteDirectory: string): Promise<void> {
   const displayDirectory = path.relative(process.cwd(), absoluteDirectory) || '.';
-  const handbook = await readHandbook(displayDirectory);
-  const problems: Diagnostic[] = [...handbook.diagnostics];
+  const handbook = await fitHandbook(displayDirectory);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
-  for (const dataset of handbook.datasets) {
-    problems.push(...dataset.diagnostics);
+  for (const { dataset, fitted } of handbook.datasets) {
     const correlation = dataset.correlation;
-    if (correlation === undefined) continue;
-    const fitted = fitDataset(correlation);
-    problems.push(...fitted.diagnostics);
+    if (correlation === undefined || fitted === undefined) continue;
     const entry: CorrelationEntry = {
       slug: correlation.slug,
       meta: correlation.meta,
@@ -43,7 +39,7 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(correlation.metadataPath)) });
   }
 
-  const sorted = sortDiagnostics(problems);
+  const sorted = handbook.diagnostics;
   for (const problem of sorted) {
     if (problem.severity === 'warning') context.logger.warn(formatDiagnostic(problem));
     else context.logger.error(formatDiagnostic(problem));

@@ -1,0 +1,35 @@
+/**
+ * Read, validate and fit every correlation folder of a handbook: the one pass that both `correlary check` and the
+ * Astro loader make. Every message from reading and fitting is collected; a folder that could not be read or
+ * fitted is kept with `fitted` undefined so callers can say so.
+ */
+import { fitDataset, type DatasetFit } from './fitDataset.ts';
+import { readHandbook } from './readHandbook.ts';
+import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
+import type { DatasetResult } from './types.ts';
+
+export interface FittedDataset {
+  readonly dataset: DatasetResult;
+  /** The fit, when the folder was read without errors (the fit itself may still have failed). */
+  readonly fitted: DatasetFit | undefined;
+}
+
+export interface FittedHandbook {
+  readonly datasets: readonly FittedDataset[];
+  /** Every error and warning, in file and line order. */
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+/** @example (await fitHandbook('content')).datasets.length // => 13 for the demo handbook */
+export async function fitHandbook(directory: string): Promise<FittedHandbook> {
+  const handbook = await readHandbook(directory);
+  const diagnostics: Diagnostic[] = [...handbook.diagnostics];
+  const datasets: FittedDataset[] = [];
+  for (const dataset of handbook.datasets) {
+    diagnostics.push(...dataset.diagnostics);
+    const fitted = dataset.correlation === undefined ? undefined : fitDataset(dataset.correlation);
+    if (fitted) diagnostics.push(...fitted.diagnostics);
+    datasets.push({ dataset, fitted });
+  }
+  return { datasets, diagnostics: sortDiagnostics(diagnostics) };
+}
