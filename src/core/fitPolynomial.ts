@@ -20,7 +20,7 @@ import { Matrix } from 'ml-matrix';
 import { domainMapFor, toUnit } from './domain.ts';
 import { mappedCovarianceToPower, mappedToPower } from './convertBasis.ts';
 import { chiSquareUpperP, tQuantile } from './distributions.ts';
-import { evaluateFit } from './evaluate.ts';
+import { evaluateFit, horner } from './evaluate.ts';
 import { exactLeastSquares } from './exact/exactLeastSquares.ts';
 import { FitError } from './fitError.ts';
 import { roundSignificant } from './format/roundSignificant.ts';
@@ -145,6 +145,16 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const warnings: string[] = [];
   if (dof < 2) warnings.push(`only ${dof} residual degree${dof === 1 ? '' : 's'} of freedom: the fit nearly interpolates the data`);
   if (solution.condition > 1e10) warnings.push(`the mapped design matrix is ill-conditioned (condition number ${solution.condition.toPrecision(3)})`);
+  // The power form is what designers copy: make sure it reproduces the fit (it cannot when u^k or a_k leave the
+  // double range, e.g. x ≈ 1e-200 in an order-2 fit). The mapped form is always usable.
+  const powerFormWorst = checkValues.reduce((worst, check) => {
+    const viaPowers = horner(coefficients, forwardX(transformX, check.x));
+    const viaMapped = forwardY(transformY, check.y);
+    return Math.max(worst, Math.abs(viaPowers - viaMapped) / Math.max(Math.abs(viaMapped), digitTolerance));
+  }, 0);
+  if (!(powerFormWorst < 1e-6)) {
+    warnings.push('the power-basis coefficients do not reproduce the fit in double precision (x is too large or too small for its powers); use the mapped form, or change the unit of x');
+  }
   if (refinement === 'none' && options.exact !== 'off') {
     warnings.push('exact certification failed; the floating-point solution is reported');
   }

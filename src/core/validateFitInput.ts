@@ -5,6 +5,9 @@
 import { FitError } from './fitError.ts';
 import type { FitData, FitOptions, PointConstraint, TransformX, TransformY } from './types.ts';
 
+/** Largest |x| or |y| accepted: squares and sums of squares of such values stay finite in double precision. */
+export const MAX_MAGNITUDE = 1e150;
+
 export interface ValidatedOptions {
   readonly order: number;
   readonly intercept: boolean;
@@ -33,7 +36,18 @@ export function validateFitData(data: FitData): void {
       throw new FitError('bad-uncertainty', `uncertainty ${sigma} is not a positive finite number`, i);
     }
   }
-  if (new Set(data.x).size < 2) throw new FitError('constant-x', 'all x values are equal, so no curve in x can be fitted');
+  if (n === 0) throw new FitError('too-few-points', 'the data have no points');
+  if (new Set(data.x).size < 2) {
+    throw new FitError('constant-x', n === 1 ? 'the data have one point; a correlation needs at least two different x values' : 'all x values are equal, so no curve in x can be fitted');
+  }
+  // Sums of squares of values beyond 1e150 overflow double precision: ask for other units instead of printing Infinity.
+  for (let i = 0; i < n; i++) {
+    for (const [name, value] of [['x', data.x[i]!], ['y', data.y[i]!]] as const) {
+      if (Math.abs(value) > MAX_MAGNITUDE) {
+        throw new FitError('out-of-range', `${name} = ${value} is too large to fit in double precision (limit ${MAX_MAGNITUDE}); change its unit`, i);
+      }
+    }
+  }
 }
 
 export function validateFitInput(data: FitData, options: FitOptions): ValidatedOptions {

@@ -238,3 +238,17 @@ describe('fitPolynomial validity range', () => {
     );
   });
 });
+
+describe('fitPolynomial magnitude limits', () => {
+  it('fitPolynomial refuses values whose squares would overflow, naming the point', () => {
+    expect(() => fitPolynomial({ x: [1, 2, 3, 4], y: [1, 2e200, 3, 4] }, { order: 1 })).toThrowError(/y = 2e\+200 is too large to fit in double precision/);
+  });
+
+  it('fitPolynomial warns when the power form cannot reproduce the fit (x ≈ 1e-200, order 2)', () => {
+    const x = [1e-200, 2e-200, 3e-200, 4e-200, 5e-200];
+    const fit = fitPolynomial({ x, y: [1, 2, 3.5, 4, 6] }, { order: 2 });
+    expect(fit.warnings.join(' ')).toMatch(/power-basis coefficients do not reproduce the fit/);
+    // The mapped form still evaluates correctly: the check value at the low end is the fitted value there.
+    expect(Number.isFinite(fit.checkValues[0]!.y)).toBe(true);
+  });
+});
