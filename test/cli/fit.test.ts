@@ -73,7 +73,7 @@ describe('correlary fit bad input', () => {
     ['decimal comma', 'x;y\n1,5;2\n', [], /bad\.csv:1:1: fields are separated by semicolons and numbers use decimal commas, but Correlary reads only comma-separated files with '\.' decimals/],
     ['unknown column', 'x,y\n1,2\n2,3\n3,4\n', ['--y', 'cp'], /bad\.csv:1:1: header has no column 'cp' \(named by --y\); the header has: x, y$/],
     ['constant x', 'x,y\n1,2\n1,3\n1,4\n', [], /bad\.csv: all x values are equal/],
-    ['too few points', 'x,y\n1,2\n2,3\n', [], /bad\.csv: .*at least three points/],
+    ['too few points', 'x,y\n1,2\n2,3\n', [], /bad\.csv: choosing an order needs at least 3 points with 2 different x values; the data have 2 points and 2 different x values$/],
     ['log of a negative value', 'x,y\n1,2\n2,-3\n3,4\n4,5\n', ['--transform-y', 'log'], /bad\.csv:3: y = -3 is not positive, so ln y is undefined$/],
     ['ragged row', 'x,y\n1,2\n2,3,4\n', [], /bad\.csv:3: row has 3 fields but the header has 2; a decimal comma\? write 1\.5, not 1,5/],
     ['order too high', 'x,y\n1,2\n2,3\n3,5\n4,4\n', ['--order', '4'], /bad\.csv: /],

@@ -16,6 +16,7 @@
  * // => { criterion: 'lowestJustified', order: 3, reason: 'Order 3: no higher order up to 6 improves …', orders: [...], … }
  */
 import { FitError } from '../fitError.ts';
+import { validateFitData } from '../validateFitInput.ts';
 import { fittedSpaceWeights, forwardX, forwardY, transformData } from '../transforms.ts';
 import type { DomainMap, FitData, PointConstraint, TransformX, TransformY } from '../types.ts';
 import { candidateTable } from './candidateTable.ts';
@@ -88,10 +89,7 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
   if (options.fixedOrder !== undefined && !(options.reason && options.reason.trim().length > 0)) {
     throw new FitError('fixed-order-needs-reason', 'selectOrder requires a reason for a fixed order');
   }
-  if (data.x.length !== data.y.length) throw new FitError('length-mismatch', 'selectOrder requires x and y of equal length');
-  data.x.forEach((value, i) => {
-    if (!Number.isFinite(value) || !Number.isFinite(data.y[i])) throw new FitError('not-finite', 'selectOrder requires finite x and y', i);
-  });
+  validateFitData(data);
   const { u, v } = transformData(data.x, data.y, transformX, transformY);
   const weights = weightsFor(data, transformY);
   const uncertaintyGiven = weights !== undefined;
@@ -107,14 +105,14 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
   const maxCandidate = maxCandidateOrder(n, distinct, options.maxOrder ?? DEFAULT_MAX_ORDER);
   const lowestOrder = intercept ? 0 : 1;
   if (maxCandidate < 1) {
-    throw new FitError('too-few-points', `selectOrder requires at least three points with two distinct x values, got ${n} points and ${distinct} distinct x`);
+    throw new FitError('too-few-points', `choosing an order needs at least 3 points with 2 different x values; the data have ${n} points and ${distinct} different x values`);
   }
   let fitMax = maxCandidate;
   if (options.fixedOrder !== undefined) {
     const fixed = options.fixedOrder;
     const highestIdentifiable = Math.min(n - 1, distinct - 1);
     if (!Number.isInteger(fixed) || fixed < lowestOrder || fixed > highestIdentifiable) {
-      throw new FitError('order-too-high', `selectOrder requires a fixed order between ${lowestOrder} and ${highestIdentifiable}, got ${fixed}`);
+      throw new FitError('order-too-high', `order ${fixed} cannot be fitted: with ${n} points and ${distinct} different x values the order must be between ${lowestOrder} and ${highestIdentifiable}`);
     }
     fitMax = Math.max(fitMax, fixed);
   }

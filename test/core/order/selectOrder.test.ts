@@ -97,7 +97,7 @@ describe('selectOrder', () => {
   });
 
   it('selectOrder rejects too few points and non-finite values', () => {
-    expect(() => selectOrder({ x: [1, 2], y: [1, 2] })).toThrow(/at least three points/);
+    expect(() => selectOrder({ x: [1, 2], y: [1, 2] })).toThrow(/choosing an order needs at least 3 points with 2 different x values; the data have 2 points and 2 different x values/);
     expect(() => selectOrder({ x: [1, 2, 3, 4], y: [1, Number.NaN, 3, 4] })).toThrow(FitError);
   });
 });
