@@ -25,9 +25,14 @@ export async function fitHandbook(directory: string): Promise<FittedHandbook> {
   const handbook = await readHandbook(directory);
   const diagnostics: Diagnostic[] = [...handbook.diagnostics];
   const datasets: FittedDataset[] = [];
-  for (const dataset of handbook.datasets) {
-    diagnostics.push(...dataset.diagnostics);
-    const fitted = dataset.correlation === undefined ? undefined : fitDataset(dataset.correlation);
+  for (const read of handbook.datasets) {
+    diagnostics.push(...read.diagnostics);
+    // Errors about the folder as a whole (an invalid or duplicate slug) belong to it too: such a folder is not fitted.
+    const folderErrors = handbook.diagnostics.filter(
+      (diagnostic) => diagnostic.severity === 'error' && (diagnostic.file === read.folder || diagnostic.file === read.metadataPath),
+    );
+    const dataset = folderErrors.length ? { ...read, diagnostics: [...read.diagnostics, ...folderErrors] } : read;
+    const fitted = dataset.correlation === undefined || folderErrors.length ? undefined : fitDataset(dataset.correlation);
     if (fitted) diagnostics.push(...fitted.diagnostics);
     datasets.push({ dataset, fitted });
   }

@@ -1,7 +1,7 @@
 /**
  * `correlary check` and `correlary new` through their exported run functions, with console output captured.
  */
-import { mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { cp, mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
@@ -30,6 +30,17 @@ async function scratch(): Promise<string> {
 }
 
 describe('runCheck(args)', () => {
+  it('runCheck does not fit a folder whose name is not a valid slug, and counts that error in its summary', async () => {
+    const directory = await scratch();
+    await cp(`${FIXTURES}/valid/liquid-a`, path.join(directory, 'Liquid_A'), { recursive: true });
+    expect(await runCheck([directory])).toBe(1);
+    expect(printed).toEqual([
+      `${path.join(directory, 'Liquid_A')}: folder name 'Liquid_A' is not a valid slug; use lower-case letters and digits joined by single hyphens, or set slug: in the metadata`,
+      'Liquid_A: not fitted, 1 error',
+      `checked 1 correlation in ${directory}: 1 error, 0 warnings`,
+    ]);
+  });
+
   it('runCheck([valid]) prints one summary line per correlation and exits 0', async () => {
     expect(await runCheck([`${FIXTURES}/valid`])).toBe(0);
     expect(printed).toEqual([
