@@ -68,7 +68,7 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
   }
   const metadataRealpath = await resolveDataFile(absoluteFolder, METADATA_FILE);
   if (!metadataRealpath.ok) {
-    diagnostics.push(error(metadataPath, { line: 0 }, 'metadata file is a symbolic link to a file outside the correlation folder'));
+    diagnostics.push(error(metadataPath, { line: 0 }, 'metadata file is a symbolic link to a file outside the correlation folder', 'copy the metadata into the folder instead of linking to it'));
     return done(folderSlug);
   }
   const metadataText = await readText(path.resolve(folder, METADATA_FILE), metadataPath, METADATA_FILE_LIMIT_BYTES);

@@ -75,6 +75,9 @@ const CASES: [string, string[]][] = [
   ['metadata-missing', [
     "liquid-a/correlation.yaml: file not found; every correlation folder needs one; found 'meta.yml'; the metadata file must be named correlation.yaml",
   ]],
+  ['metadata-symlink', [
+    "liquid-a/correlation.yaml: metadata file is a symbolic link to a file outside the correlation folder; copy the metadata into the folder instead of linking to it",
+  ]],
   ['missing-key', [
     "liquid-a/correlation.yaml:1:1: missing required key 'title'",
     "liquid-a/correlation.yaml:14:1: missing required key 'preparedBy' in 'source'",
