@@ -16,7 +16,7 @@
  * @example fitPolynomial({ x: [0, 1, 2, 3], y: [1, 3, 5, 7] }, { order: 1 }).coefficients // => [1, 2]
  * @throws FitError when the data cannot support the requested fit (too few distinct x, rank deficiency, …)
  */
-import { Matrix } from 'ml-matrix';
+import { designMatrix } from './designMatrix.ts';
 import { domainMapFor, toUnit } from './domain.ts';
 import { mappedCovarianceToPower, mappedToPower } from './convertBasis.ts';
 import { chiSquareUpperP, tQuantile } from './distributions.ts';
@@ -32,11 +32,6 @@ import { runsTest } from './stats/runsTest.ts';
 import { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
 import { validateFitInput } from './validateFitInput.ts';
 import type { FitData, FitOptions, PolynomialFit } from './types.ts';
-
-function design(values: readonly number[], powers: readonly number[], rowScale?: readonly number[]): Matrix {
-  return new Matrix(values.map((value, i) => powers.map((k) => value ** k * (rowScale ? rowScale[i]! : 1))));
-}
-
 
 export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit {
   const { order, intercept, transformX, transformY, constraints, confidence, range } = validateFitInput(data, options);
@@ -65,8 +60,8 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
 
   const map = domainMapFor(u, intercept);
   const t = u.map((value) => toUnit(map, value));
-  const A = design(t, powers, rootWeights);
-  const constraintMatrix = design(cu.map((value) => toUnit(map, value)), powers);
+  const A = designMatrix(t, powers, rootWeights);
+  const constraintMatrix = designMatrix(cu.map((value) => toUnit(map, value)), powers);
   const solution = solveLeastSquares(
     A,
     v.map((value, i) => value * rootWeights[i]!),
@@ -192,7 +187,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       looRmse: summary.looRmse,
       aicc: summary.aicc,
       bic: summary.bic,
-      conditionRaw: conditionNumber(design(u, powers, rootWeights)),
+      conditionRaw: conditionNumber(designMatrix(u, powers, rootWeights)),
       conditionMapped: conditionNumber(A),
       reducedChiSquare: weighted && dof > 0 ? summary.residualSumOfSquares / dof : null,
       chiSquareP: weighted && dof > 0 ? chiSquareUpperP(summary.residualSumOfSquares, dof) : null,

@@ -9,13 +9,8 @@
  *
  * Cost: O(p·grid) per check.
  */
+import { horner } from '../evaluate.ts';
 import { roundSignificant } from './roundSignificant.ts';
-
-function horner(coefficients: readonly number[], u: number): number {
-  let value = 0;
-  for (let k = coefficients.length - 1; k >= 0; k--) value = value * u + coefficients[k]!;
-  return value;
-}
 
 /** Digits per coefficient. @example significantDigits([1.234567, 2.5e-3], 0, 10, 1e-3) // => one count per coefficient */
 export function significantDigits(coefficients: readonly number[], uMin: number, uMax: number, tolerance: number): number[] {

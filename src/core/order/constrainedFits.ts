@@ -12,9 +12,10 @@
  * Reference: Å. Björck, Numerical Methods for Least Squares Problems, SIAM 1996, §5.1.
  * Cost: O(M · n · M²) for M candidate orders.
  */
-import { Matrix } from 'ml-matrix';
+import { designMatrix } from '../designMatrix.ts';
 import { FitError } from '../fitError.ts';
 import { solveLeastSquares } from '../leastSquares.ts';
+import { totalSumOfSquares } from '../stats/residualStatistics.ts';
 import { domainMapFor, toUnit } from '../domain.ts';
 import { RESIDUAL_FLOOR_RELATIVE, type NestedFits, type NestedOrderFit } from './nestedFits.ts';
 
@@ -56,8 +57,8 @@ export function fitConstrainedOrders(u: readonly number[], v: readonly number[],
   const fits: NestedOrderFit[] = [];
   for (let order = firstOrder; order <= options.maxOrder; order++) {
     const powers = Array.from({ length: order + 1 - firstPower }, (_, j) => j + firstPower);
-    const A = new Matrix(t.map((value, i) => powers.map((k) => value ** k * rootWeights[i]!)));
-    const C = new Matrix(ct.map((value) => powers.map((k) => value ** k)));
+    const A = designMatrix(t, powers, rootWeights);
+    const C = designMatrix(ct, powers);
     const solution = solveLeastSquares(A, weightedV, { C, d: options.constraints.map((c) => c.v) });
     let sumOfSquares = 0;
     let press = 0;
@@ -84,18 +85,7 @@ export function fitConstrainedOrders(u: readonly number[], v: readonly number[],
       mappedCoefficients,
     });
   }
-  let totalSumOfSquares = 0;
-  if (intercept) {
-    let sumW = 0;
-    let mean = 0;
-    v.forEach((value, i) => {
-      const w = rootWeights[i]! ** 2;
-      sumW += w;
-      mean += (w / sumW) * (value - mean);
-    });
-    v.forEach((value, i) => (totalSumOfSquares += rootWeights[i]! ** 2 * (value - mean) ** 2));
-  } else {
-    for (const value of weightedV) totalSumOfSquares += value * value;
-  }
-  return { n, intercept, weighted: options.weights !== undefined, map, totalSumOfSquares, residualFloor, fits };
+  const weights = rootWeights.map((root) => root * root);
+  const total = totalSumOfSquares(v, weights, intercept);
+  return { n, intercept, weighted: options.weights !== undefined, map, totalSumOfSquares: total, residualFloor, fits };
 }

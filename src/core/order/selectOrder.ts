@@ -66,14 +66,6 @@ export interface OrderSelection {
   readonly warnings: readonly string[];
 }
 
-function weightsFor(data: FitData, transformY: TransformY): number[] | undefined {
-  if (!data.uncertainty) return undefined;
-  if (data.uncertainty.length !== data.y.length) {
-    throw new FitError('length-mismatch', 'selectOrder requires one uncertainty per point');
-  }
-  return fittedSpaceWeights(data.y, data.uncertainty, transformY);
-}
-
 /**
  * Select the polynomial order for one data set.
  * @throws FitError 'fixed-order-needs-reason', 'chi-square-needs-uncertainty', 'too-few-points',
@@ -91,7 +83,7 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
   }
   validateFitData(data);
   const { u, v } = transformData(data.x, data.y, transformX, transformY);
-  const weights = weightsFor(data, transformY);
+  const weights = data.uncertainty ? fittedSpaceWeights(data.y, data.uncertainty, transformY) : undefined;
   const uncertaintyGiven = weights !== undefined;
   if (criterion.requiresUncertainty && !uncertaintyGiven) {
     throw new FitError('chi-square-needs-uncertainty', 'selectOrder requires per-point uncertainties for the chiSquare criterion');

@@ -1,0 +1,10 @@
+/**
+ * Polynomial design (Vandermonde) matrix: row i holds value_i^k for each power k, times an optional row scale
+ * (√w_i for a weighted fit). Used with values of the mapped variable t, where the columns stay well conditioned.
+ * @example designMatrix([2, 3], [0, 1, 2]).to2DArray() // => [[1, 2, 4], [1, 3, 9]]
+ */
+import { Matrix } from 'ml-matrix';
+
+export function designMatrix(values: readonly number[], powers: readonly number[], rowScale?: readonly number[]): Matrix {
+  return new Matrix(values.map((value, i) => powers.map((k) => value ** k * (rowScale ? rowScale[i]! : 1))));
+}
