@@ -9,7 +9,7 @@ import { formatDiagnostic, sortDiagnostics, type Diagnostic } from '../load/inde
 import { DATA_FILE_LIMIT_BYTES } from '../load/limits.ts';
 import { readCsv, type CsvTable } from '../load/readCsv.ts';
 import { readText } from '../load/readText.ts';
-import { tableToPoints } from '../load/tableToPoints.ts';
+import { NUMBER_PATTERN, tableToPoints } from '../load/tableToPoints.ts';
 import { CliError } from './cliError.ts';
 
 export interface FitTable {
@@ -26,14 +26,12 @@ function firstError(diagnostics: readonly Diagnostic[]): CliError | undefined {
   return first ? new CliError(formatDiagnostic(first)) : undefined;
 }
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-
 /**
  * A table whose first row is all numbers has no header: with no column named, `fit` reads it as data and calls
  * the columns 'column 1', 'column 2', … (x is the first, y the second). Any other table is returned unchanged.
  */
 function withoutHeader(table: CsvTable): CsvTable {
-  if (!table.header.every((cell) => NUMBER.test(cell.text))) return table;
+  if (!table.header.every((cell) => NUMBER_PATTERN.test(cell.text))) return table;
   return {
     headerLine: table.headerLine,
     header: table.header.map((cell, index) => ({ ...cell, text: `column ${index + 1}` })),

@@ -7,7 +7,7 @@ import type { CsvCell, CsvTable } from './readCsv.ts';
 import { suggest } from './suggest.ts';
 
 /** A plain decimal number: optional sign, digits with an optional '.' part, optional exponent. */
-const NUMBER_PATTERN = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+export const NUMBER_PATTERN = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const NON_FINITE_PATTERN = /^[+-]?(nan|inf|infinity)$/i;
 const DECIMAL_COMMA_PATTERN = /^[+-]?\d+,\d+([eE][+-]?\d+)?$/;
 
