@@ -189,8 +189,9 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       bic: summary.bic,
       conditionRaw: conditionNumber(designMatrix(u, powers, rootWeights)),
       conditionMapped: conditionNumber(A),
-      reducedChiSquare: weighted && dof > 0 ? summary.residualSumOfSquares / dof : null,
-      chiSquareP: weighted && dof > 0 ? chiSquareUpperP(summary.residualSumOfSquares, dof) : null,
+      // Weighted by 1/σ², S_r is the χ² statistic and s² the reduced χ²: the same certified numbers as above.
+      reducedChiSquare: weighted && dof > 0 ? residualStats.residualVariance : null,
+      chiSquareP: weighted && dof > 0 ? chiSquareUpperP(residualStats.residualSumOfSquares, dof) : null,
     },
     lackOfFit: lackOfFit(u, v, weights, summary.residualSumOfSquares, parameters),
     runsTest: runsTest(xOrder, residuals, 1e-14 * (scaleV || 1)),
