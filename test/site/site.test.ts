@@ -78,6 +78,26 @@ describe('astro build of the demo handbook', () => {
     for (const caution of CAUTIONS) expect(html).toContain(escapeHtml(caution));
   });
 
+  it('index.html and every page show the review status as a worded badge; unapproved rows are set apart', async () => {
+    // The words come from the review status each correlation.yaml states (content/README.md, review.status).
+    const words: Record<string, string> = { approved: 'Approved', draft: 'Draft · not approved', 'in-review': 'In review · not approved', withdrawn: 'Withdrawn · do not use' };
+    const html = await readFile(path.join(outDir, 'index.html'), 'utf8');
+    const rows = [...html.matchAll(/<tr(?: class="([^"]*)")?>\s*<td><a href="\/correlations\/([^/]+)\/">(.*?)<\/tr>/gs)];
+    expect(rows.length).toBe(correlations.length);
+    for (const [, rowClass, slug, row] of rows) {
+      const status = correlations.find((correlation) => correlation.slug === slug)!.meta.review.status;
+      expect(row, slug).toContain(`data-status="${status}"`);
+      expect(row, slug).toMatch(new RegExp(`</span> ${words[status]}</span>`));
+      expect((rowClass ?? '').includes('not-approved'), `${slug} row set apart`).toBe(status !== 'approved');
+    }
+    for (const correlation of correlations) {
+      const text = await page(correlation.slug);
+      const status = correlation.meta.review.status;
+      expect(text.match(new RegExp(`data-status="${status}"`, 'g'))?.length, `${correlation.slug}: lede and provenance`).toBe(2);
+      expect(text, correlation.slug).toContain(`</span> ${words[status]}</span>`);
+    }
+  });
+
   it('every correlation page carries the cautions, KaTeX output, the validity range and (when invented) the banner', async () => {
     for (const correlation of correlations) {
       const html = await page(correlation.slug);
