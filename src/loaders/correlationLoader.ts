@@ -55,7 +55,11 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     const data = await context.parseData({ id, data: entry, filePath });
     context.store.set({ id, data, digest: context.generateDigest(data), filePath });
   }
-  context.logger.info(`loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory}`);
+  const { readingMs, fittingMs } = handbook.timing;
+  const seconds = (ms: number): string => (ms / 1000).toFixed(2);
+  context.logger.info(
+    `loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory} in ${seconds(readingMs + fittingMs)} s (fitting ${seconds(fittingMs)} s)`,
+  );
 }
 
 /** Watchers already subscribed, so that a repeated load in `astro dev` does not add a second listener. */

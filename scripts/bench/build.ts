@@ -1,0 +1,133 @@
+/**
+ * bench:build — how the handbook build scales. Writes a seeded synthetic handbook of N correlations
+ * (scripts/bench/build/syntheticHandbook.ts) into a temporary project, builds it cold with Astro, changes one
+ * dataset and builds again, then builds a bare Astro site of N trivial pages as the baseline, and prints the
+ * figures and the targets. Prints figures only; nothing here asserts a time.
+ *
+ * Run: npm run bench:build -- --count 1000 [--seed 1] [--keep] [--verbose]
+ */
+import { readFile, readdir, rm, stat, writeFile, mkdtemp } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { makeBareProject, makeSiteProject } from './build/benchProjects.ts';
+import { runMeasured, type MeasuredRun } from './build/runMeasured.ts';
+import { writeSyntheticHandbook } from './build/syntheticHandbook.ts';
+
+const repository = fileURLToPath(new URL('../..', import.meta.url));
+const argv = process.argv.slice(2);
+function option(name: string, fallback: string): string {
+  const at = argv.findIndex((arg) => arg === `--${name}` || arg.startsWith(`--${name}=`));
+  if (at < 0) return fallback;
+  const arg = argv[at]!;
+  return arg.includes('=') ? arg.slice(arg.indexOf('=') + 1) : (argv[at + 1] ?? fallback);
+}
+const count = Number(option('count', '100'));
+const seed = Number(option('seed', '1'));
+const keep = argv.includes('--keep');
+const verbose = argv.includes('--verbose');
+if (!Number.isInteger(count) || count < 1) throw new Error(`bench:build requires --count to be a positive whole number; got ${option('count', '')}`);
+
+const astro = path.join(repository, 'node_modules', 'astro', 'astro.js');
+const env = { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', NODE_ENV: 'production', FORCE_COLOR: '0', NO_COLOR: '1' };
+
+function build(cwd: string): Promise<MeasuredRun> {
+  return runMeasured(process.execPath, [astro, 'build'], { cwd, env, echo: verbose });
+}
+
+const plain = (text: string): string => text.replace(/\x1b\[[0-9;]*m/g, '');
+
+/** Seconds of an Astro phase, from its "✓ Completed in …" line after the line that opens it. */
+function phaseSeconds(run: MeasuredRun, opener: RegExp): number | undefined {
+  const lines = run.lines.map((line) => plain(line.text));
+  const start = lines.findIndex((text) => opener.test(text));
+  if (start < 0) return undefined;
+  for (const text of lines.slice(start + 1)) {
+    const match = /Completed in ([\d.]+)(ms|s)/.exec(text);
+    if (match) return Number(match[1]) / (match[2] === 'ms' ? 1000 : 1);
+  }
+  return undefined;
+}
+
+/** Seconds the loader reports for reading and fitting, and how many fits came from the cache. */
+function loaderFigures(run: MeasuredRun): { seconds?: number; fitSeconds?: number; cached?: number } {
+  for (const { text } of run.lines) {
+    const match = /loaded \d+ correlations? from .* in ([\d.]+) s(?: \(fitting ([\d.]+) s(?:, (\d+) from the fit cache)?\))?/.exec(plain(text));
+    if (match) return { seconds: Number(match[1]), fitSeconds: match[2] ? Number(match[2]) : undefined, cached: match[3] ? Number(match[3]) : undefined };
+  }
+  return {};
+}
+
+async function walk(folder: string): Promise<{ file: string; size: number }[]> {
+  const out: { file: string; size: number }[] = [];
+  for (const item of await readdir(folder, { withFileTypes: true })) {
+    const full = path.join(folder, item.name);
+    if (item.isDirectory()) out.push(...(await walk(full)));
+    else out.push({ file: full, size: (await stat(full)).size });
+  }
+  return out;
+}
+
+const mb = (bytes: number): string => `${(bytes / 1e6).toFixed(1)} MB`;
+const kb = (bytes: number): string => `${(bytes / 1e3).toFixed(1)} KB`;
+const gb = (bytes: number): string => `${(bytes / 1e9).toFixed(2)} GB`;
+const s = (seconds: number | undefined): string => (seconds === undefined ? 'n/a' : `${seconds.toFixed(1)} s`);
+
+function failIfBroken(run: MeasuredRun, what: string): void {
+  if (run.code === 0) return;
+  const tail = run.lines.slice(-40).map((line) => line.text).join('\n');
+  throw new Error(`${what} failed with exit code ${run.code}:\n${tail}`);
+}
+
+const root = await mkdtemp(path.join(tmpdir(), 'correlary-bench-build-'));
+const site = path.join(root, 'site');
+const bare = path.join(root, 'bare');
+try {
+  console.log(`bench:build — ${count} synthetic correlations (seed ${seed}), node ${process.version}, ${path.basename(root)}`);
+  await makeSiteProject(repository, site);
+  await writeSyntheticHandbook(path.join(site, 'content'), { count, seed });
+
+  const cold = await build(site);
+  failIfBroken(cold, 'the handbook build');
+  const files = await walk(path.join(site, 'dist'));
+  const pages = files.filter((item) => item.file.endsWith('.html'));
+  const largest = pages.reduce((best, item) => (item.size > best.size ? item : best), { file: '', size: 0 });
+  const scripts = files.filter((item) => item.file.includes(`${path.sep}_astro${path.sep}`) && item.file.endsWith('.js'));
+  const distBytes = files.reduce((sum, item) => sum + item.size, 0);
+  const loaded = loaderFigures(cold);
+  const entrypoints = phaseSeconds(cold, /Building static entrypoints/);
+  const rendering = phaseSeconds(cold, /generating static routes/);
+
+  // Change one dataset (the last y of the first folder) and build again on the warm cache.
+  const changed = path.join(site, 'content', 'synthetic-00000', 'data.csv');
+  const csv = (await readFile(changed, 'utf8')).trimEnd().split('\n');
+  const last = csv[csv.length - 1]!.split(',');
+  last[1] = String(Number(last[1]) + 1e-3);
+  csv[csv.length - 1] = last.join(',');
+  await writeFile(changed, `${csv.join('\n')}\n`);
+  const rebuild = await build(site);
+  failIfBroken(rebuild, 'the rebuild');
+  const reloaded = loaderFigures(rebuild);
+
+  await makeBareProject(repository, bare, count);
+  const baseline = await build(bare);
+  failIfBroken(baseline, 'the bare Astro build');
+
+  const ratio = cold.wallMs / baseline.wallMs;
+  const lines = [
+    `handbook build (cold):        ${s(cold.wallMs / 1000)} wall, peak memory ${gb(cold.peakRss)} (RSS of the build's process tree)`,
+    `  reading + fitting:          ${s(loaded.seconds)}${loaded.fitSeconds === undefined ? '' : ` (fitting ${s(loaded.fitSeconds)})`}`,
+    `  static entrypoints:         ${s(entrypoints)}`,
+    `  rendering pages:            ${s(rendering)}, ${pages.length} HTML pages, ${rendering ? (pages.length / rendering).toFixed(0) : 'n/a'} pages/s (${(pages.length / (cold.wallMs / 1000)).toFixed(0)} pages/s over the whole build)`,
+    `  dist/:                      ${mb(distBytes)} in ${files.length} files; largest page ${kb(largest.size)} (${path.relative(path.join(site, 'dist'), largest.file)}); shared scripts ${kb(scripts.reduce((sum, item) => sum + item.size, 0))} in ${scripts.length} file(s)`,
+    `rebuild after changing 1 of ${count} datasets: ${s(rebuild.wallMs / 1000)} wall, reading + fitting ${s(reloaded.seconds)}${reloaded.fitSeconds === undefined ? '' : ` (fitting ${s(reloaded.fitSeconds)}${reloaded.cached === undefined ? '' : `, ${reloaded.cached} from the fit cache`})`}, peak memory ${gb(rebuild.peakRss)}`,
+    `  rebuild fitting / cold fitting: ${loaded.fitSeconds && reloaded.fitSeconds !== undefined ? `${((100 * reloaded.fitSeconds) / loaded.fitSeconds).toFixed(1)} %` : 'n/a'}`,
+    `bare Astro build of ${count} trivial pages: ${s(baseline.wallMs / 1000)} wall, peak memory ${gb(baseline.peakRss)}`,
+    'targets: N = 1000: ratio ≤ 3 (stretch 2), peak memory ≤ 1.5 GB; N = 5000: completes, ratio ≤ 3; rebuild after changing 1 of 1000 spends < 5 % of the cold fitting time fitting',
+    `build/baseline ratio: ${ratio.toFixed(2)}`,
+  ];
+  console.log(lines.join('\n'));
+} finally {
+  if (keep) console.error(`kept ${root}`);
+  else await rm(root, { recursive: true, force: true });
+}
