@@ -9,7 +9,8 @@ const USAGE = `usage: correlary <command> [options]
 commands:
   fit <file.csv>   fit one table and report the correlation (--json for machine-readable output)
   check [DIR]      validate and fit every correlation in a handbook folder (default: content)
-  new <slug>       create a commented template for a new correlation`;
+  new <slug>       create a commented template for a new correlation
+  build            build a handbook folder into a static site (--content DIR, --out DIR, --base PATH)`;
 
 export async function main(args: readonly string[]): Promise<number> {
   const [command, ...rest] = args;
@@ -26,6 +27,10 @@ export async function main(args: readonly string[]): Promise<number> {
       case 'new': {
         const { runNew } = await import('./new.ts');
         return await runNew(rest);
+      }
+      case 'build': {
+        const { runBuild } = await import('./build.ts');
+        return await runBuild(rest);
       }
       case undefined:
       case '-h':

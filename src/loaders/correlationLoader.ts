@@ -13,7 +13,10 @@ import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
-  /** Content directory, relative to the project root. Defaults to `content`. */
+  /**
+   * Content directory, absolute or relative to the project root. Defaults to the CORRELARY_CONTENT environment
+   * variable (set by `correlary build --content`), else `content`.
+   */
   readonly directory?: string;
 }
 
@@ -70,11 +73,11 @@ const watched = new WeakSet<object>();
  * In `astro dev`, a change to any file under the content directory reloads the whole collection.
  */
 export function correlationLoader(options: CorrelationLoaderOptions = {}): Loader {
-  const directory = options.directory ?? 'content';
+  const directory = options.directory ?? process.env['CORRELARY_CONTENT'] ?? 'content';
   return {
     name: 'correlary-correlations',
     load: async (context) => {
-      const absoluteDirectory = fileURLToPath(new URL(directory.endsWith('/') ? directory : `${directory}/`, context.config.root));
+      const absoluteDirectory = path.resolve(fileURLToPath(context.config.root), directory);
       await loadAll(context, absoluteDirectory);
       const watcher = context.watcher;
       if (watcher === undefined || watched.has(watcher)) return;

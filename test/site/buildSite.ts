@@ -1,6 +1,7 @@
 /**
- * Build the handbook once into a temporary directory, as `astro build --outDir <tmp>` in a child process
- * (a separate process keeps Astro's Vite out of vitest's own). Returns the output directory.
+ * Build the handbook once into a temporary directory, as `correlary build --out <tmp>` (the check pass, then
+ * Astro) in a child process (a separate process keeps Astro's Vite out of vitest's own). Returns the output
+ * directory.
  */
 import { spawn } from 'node:child_process';
 import { mkdtemp } from 'node:fs/promises';
@@ -12,10 +13,10 @@ export const projectRoot = fileURLToPath(new URL('../..', import.meta.url));
 
 export async function buildSite(): Promise<string> {
   const outDir = await mkdtemp(path.join(tmpdir(), 'correlary-site-'));
-  const astro = path.join(projectRoot, 'node_modules', 'astro', 'astro.js');
+  const correlary = path.join(projectRoot, 'bin', 'correlary.mjs');
   const output: string[] = [];
   const code = await new Promise<number | null>((resolve, reject) => {
-    const child = spawn(process.execPath, [astro, 'build', '--outDir', outDir], {
+    const child = spawn(process.execPath, [correlary, 'build', '--out', outDir], {
       cwd: projectRoot,
       env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', NODE_ENV: 'production' },
       stdio: ['ignore', 'pipe', 'pipe'],
@@ -25,6 +26,6 @@ export async function buildSite(): Promise<string> {
     child.on('error', reject);
     child.on('close', resolve);
   });
-  if (code !== 0) throw new Error(`astro build failed with exit code ${code}:\n${output.join('').slice(-4000)}`);
+  if (code !== 0) throw new Error(`correlary build failed with exit code ${code}:\n${output.join('').slice(-4000)}`);
   return outDir;
 }

@@ -1,0 +1,103 @@
+/**
+ * `correlary build [--content DIR] [--out DIR] [--base PATH]`: build a handbook folder into a static site.
+ *
+ * The check pass (the same read-validate-fit that `correlary check` runs) comes first; on any error the build
+ * prints every problem and stops before Astro starts, so nothing is written. Then Astro builds the site from the
+ * Correlary package's own pages, with the content folder handed to the loader through CORRELARY_CONTENT.
+ * Exit status: 0 built, 1 errors in the content or a failed build, 2 bad usage.
+ */
+import { mkdir, stat } from 'node:fs/promises';
+import path from 'node:path';
+import { parseArgs } from 'node:util';
+import { fitHandbook, formatDiagnostic } from '../load/index.ts';
+import { CliError } from './cliError.ts';
+import { packageRoot } from './packageRoot.ts';
+
+export const BUILD_USAGE = `usage: correlary build [--content DIR] [--out DIR] [--base PATH]
+  --content DIR   handbook folder to build (default: content)
+  --out DIR       folder the static site is written to (default: dist)
+  --base PATH     URL path the site is served under, e.g. /handbook/ (default: /)`;
+
+export interface BuildArguments {
+  readonly content: string;
+  readonly out: string;
+  readonly base: string | undefined;
+}
+
+/** @example parseBuildArguments(['--out', 'site']) // => { content: 'content', out: 'site', base: undefined } */
+export function parseBuildArguments(args: readonly string[]): BuildArguments {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...args],
+      allowPositionals: false,
+      options: { content: { type: 'string' }, out: { type: 'string' }, base: { type: 'string' } },
+    });
+  } catch (error) {
+    throw new CliError(`${(error as Error).message.split('\n')[0]}\n${BUILD_USAGE}`, 2);
+  }
+  const { values } = parsed;
+  for (const name of ['content', 'out', 'base'] as const) {
+    if (values[name] === '') throw new CliError(`--${name} needs a value\n${BUILD_USAGE}`, 2);
+  }
+  if (values.base !== undefined && !values.base.startsWith('/')) {
+    throw new CliError(`--base must be a URL path starting with '/', got '${values.base}'`, 2);
+  }
+  return { content: values.content ?? 'content', out: values.out ?? 'dist', base: values.base };
+}
+
+export async function runBuild(args: string[]): Promise<number> {
+  if (args.includes('-h') || args.includes('--help')) {
+    console.log(BUILD_USAGE);
+    return 0;
+  }
+  const options = parseBuildArguments(args);
+  const info = await stat(options.content).catch(() => undefined);
+  if (info === undefined || !info.isDirectory()) throw new CliError(`build requires a handbook folder; '${options.content}' is not a directory`, 2);
+  const content = path.resolve(options.content);
+  const out = path.resolve(options.out);
+  if (out === content || content.startsWith(`${out}${path.sep}`)) {
+    throw new CliError(`--out '${options.out}' would overwrite the content folder '${options.content}'; choose another folder`, 2);
+  }
+
+  // The check pass: report every problem and stop before anything is written.
+  const handbook = await fitHandbook(options.content);
+  const errors = handbook.diagnostics.filter((diagnostic) => diagnostic.severity === 'error');
+  if (errors.length > 0) {
+    for (const diagnostic of handbook.diagnostics) console.error(formatDiagnostic(diagnostic));
+    console.error(`correlary: build stopped before writing anything: ${errors.length} error${errors.length === 1 ? '' : 's'} in ${options.content} (the same as 'correlary check ${options.content}' reports)`);
+    return 1;
+  }
+
+  const root = packageRoot();
+  process.env['ASTRO_TELEMETRY_DISABLED'] = '1';
+  process.env['CORRELARY_CONTENT'] = content;
+  const cacheDir = path.resolve('node_modules', '.cache', 'correlary');
+  const { build } = await import('astro');
+  // Astro 5 stages a build whose output folder lies outside the working directory in <cwd>/.astro, imports the
+  // staged pages from there (so Correlary's dependencies must resolve from it) and then copies that whole folder
+  // into the output. <cwd>/.astro must therefore not be the package's own .astro folder, which holds Astro's
+  // bookkeeping files: such builds run from a staging folder inside the package's node_modules.
+  const workingDirectory = process.cwd();
+  const outside = !out.startsWith(`${workingDirectory}${path.sep}`);
+  if (outside) {
+    const staging = path.join(root, 'node_modules', '.cache', 'correlary-staging');
+    await mkdir(staging, { recursive: true });
+    process.chdir(staging);
+  }
+  try {
+    await build({
+      root,
+      outDir: out,
+      ...(options.base === undefined ? {} : { base: options.base }),
+      logLevel: 'warn',
+      // Astro's own cache goes beside the handbook, not into the (possibly shared) package folder.
+      cacheDir,
+    });
+  } finally {
+    if (outside) process.chdir(workingDirectory);
+  }
+  const count = handbook.datasets.filter((dataset) => dataset.fitted?.fit !== undefined).length;
+  console.log(`built ${count} correlation${count === 1 ? '' : 's'} from ${options.content} into ${options.out}`);
+  return 0;
+}
