@@ -1,6 +1,8 @@
 /**
  * Layering rules (DEVELOPERS.md): the numerical core is pure (no Astro, no Node built-ins, no DOM, no file I/O)
- * and the schemas import only zod. A file that breaks the rule fails here with its import named.
+ * and the schemas import only zod; the chart renderer (src/render) is pure too: d3-scale, d3-shape and the core's door
+ * only, so that it runs in the CLI, at build time and in the browser alike. A file that breaks the rule fails here
+ * with its import named.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
@@ -40,6 +42,29 @@ describe('architecture', () => {
     for (const file of sourceFiles(join(root, 'src/schema'))) {
       for (const spec of importsOf(file)) {
         if (!(spec.startsWith('.') || spec === 'zod')) offenders.push(`${relative(root, file)} imports ${spec}`);
+      }
+    }
+    expect(offenders).toEqual([]);
+  });
+
+  it('src/render imports only d3-scale, d3-shape, the core through its door and its own files, and touches no DOM global', () => {
+    const offenders: string[] = [];
+    for (const file of sourceFiles(join(root, 'src/render'))) {
+      for (const spec of importsOf(file)) {
+        if (!(spec.startsWith('./') || spec === '../core/index.ts' || spec === 'd3-scale' || spec === 'd3-shape')) offenders.push(`${relative(root, file)} imports ${spec}`);
+      }
+      if (DOM_GLOBALS.test(readFileSync(file, 'utf8'))) offenders.push(`${relative(root, file)} uses a DOM global`);
+    }
+    expect(offenders).toEqual([]);
+  });
+
+  it('src/client reaches src/render only through files that do not import the core', () => {
+    const offenders: string[] = [];
+    for (const file of sourceFiles(join(root, 'src/client'))) {
+      for (const spec of importsOf(file)) {
+        if (!spec.startsWith('../render/')) continue;
+        const target = join(root, 'src/render', spec.slice('../render/'.length));
+        if (spec.endsWith('/index.ts') || importsOf(target).some((inner) => inner.includes('core'))) offenders.push(`${relative(root, file)} imports ${spec}`);
       }
     }
     expect(offenders).toEqual([]);

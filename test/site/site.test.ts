@@ -114,19 +114,42 @@ describe('astro build of the demo handbook', () => {
     }
   });
 
-  it('each page embeds chart data: 200 grid points from range.min to range.max, and every point', async () => {
+  it('each page carries compact chart data (embedded, or linked above 400 points): 200 grid points from range.min to range.max, and every point', async () => {
     for (const correlation of correlations) {
       const html = await page(correlation.slug);
       const match = /<script type="application\/json">(.*?)<\/script>/s.exec(html);
-      expect(match, correlation.slug).not.toBeNull();
-      const data = JSON.parse(match![1]!) as { curve: number[][]; residualBands: number[][]; points: unknown[]; excluded: unknown[] };
+      let text: string;
+      if (correlation.used.length <= 400) {
+        expect(match, correlation.slug).not.toBeNull();
+        text = match![1]!;
+      } else {
+        expect(match, correlation.slug).toBeNull();
+        expect(html).toContain(`data-chart-href="/correlations/${correlation.slug}/chart-data.json"`);
+        text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'chart-data.json'), 'utf8');
+      }
+      const data = JSON.parse(text) as { curve: number[][]; points: number[][]; excluded: unknown[] };
       expect(data.curve).toHaveLength(200);
-      expect(data.residualBands).toHaveLength(200);
       expect(data.curve[0]![0]).toBe(correlation.range.min);
       expect(data.curve.at(-1)![0]).toBe(correlation.range.max);
       expect(data.points).toHaveLength(correlation.used.length);
+      expect(data.points.map((point) => point[0])).toEqual(correlation.used.map((point) => point.row));
       expect(data.excluded).toHaveLength(correlation.excluded.length);
+      // Compact: computed values are rounded to 6 significant digits (data values stay as written, all short here);
+      // a 17-digit double would show 10 or more.
+      const long = (text.match(/\d+\.?\d*(?:e[-+]?\d+)?/g) ?? []).filter((token) => token.replace(/e.*$/, '').replace('.', '').replace(/^0+/, '').length >= 10);
+      expect(long, `${correlation.slug}: long numbers`).toEqual([]);
+      // The static picture for readers without scripts, from the shared renderer.
+      expect(html).toContain(`src="/correlations/${correlation.slug}/plot.svg"`);
+      const svg = await readFile(path.join(outDir, 'correlations', correlation.slug, 'plot.svg'), 'utf8');
+      expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+      expect(svg.match(/h0/g)?.length ?? 0, `${correlation.slug}: a dot per point in both panels`).toBe(2 * correlation.used.length);
     }
+  });
+
+  it('the order page sets the F statistic in KaTeX like every other formula', async () => {
+    const html = await readFile(path.join(outDir, 'how-orders-are-chosen', 'index.html'), 'utf8');
+    expect(html).toContain('class="katex-display"');
+    expect(html).not.toContain('<code>F = [');
   });
 
   it('coefficients.json: cautions, range, notice, and coefficients equal to fitPolynomial to the last bit', async () => {
@@ -174,14 +197,14 @@ describe('astro build of the demo handbook', () => {
 });
 
 describe('the browser only draws', () => {
-  it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape and its own files', async () => {
+  it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, the shared renderer and its own files', async () => {
     const directory = path.join(projectRoot, 'src', 'client');
     const offenders: string[] = [];
     for (const name of await readdir(directory)) {
       const text = await readFile(path.join(directory, name), 'utf8');
       for (const match of text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
         const spec = (match[1] ?? match[2])!;
-        if (!(spec.startsWith('./') || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape'].includes(spec))) offenders.push(`${name} imports ${spec}`);
+        if (!(spec.startsWith('./') || spec.startsWith('../render/') || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom'].includes(spec))) offenders.push(`${name} imports ${spec}`);
       }
     }
     expect(offenders).toEqual([]);
@@ -226,8 +249,9 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
       expect(mainCircles).toBe(target.used.length + target.excluded.length);
       const residualCircles = await svgs.nth(1).locator('g circle').count();
       expect(residualCircles).toBe(target.used.length);
-      const paths = await svgs.nth(0).locator(':scope > path').evaluateAll((nodes) => nodes.map((node) => node.getAttribute('d') ?? ''));
+      const paths = await svgs.nth(0).locator('path.band-prediction, path.band-confidence, path.curve').evaluateAll((nodes) => nodes.map((node) => node.getAttribute('d') ?? ''));
       expect(paths.filter((d) => d.length > 100).length).toBe(3); // prediction band, confidence band, curve
+      expect(await browserPage.locator('[data-fit-chart] img.chart-static').isVisible()).toBe(false);
 
       const firstPoint = svgs.nth(0).locator('g circle').first();
       const box = (await firstPoint.boundingBox())!;

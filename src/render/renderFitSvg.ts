@@ -1,0 +1,93 @@
+/**
+ * The fit chart as one standalone SVG document, without a browser: the data (with ± uncertainty bars), the points
+ * left out (open red rings), the fitted curve with its confidence and prediction bands, and below it the residuals
+ * with the same bands drawn about the curve. Used as the page's picture when scripts do not run, in print, and by
+ * `correlary fit --plot`. Scales and paths come from chartScales/chartPaths, as in the browser chart.
+ * O(n + curve rows).
+ */
+import type { ScaleLinear } from 'd3-scale';
+import { CHART_COLORS, CHART_LAYOUT } from './chartLayout.ts';
+import { bandPath, linePath } from './chartPaths.ts';
+import { chartScales } from './chartScales.ts';
+import type { FitChartData } from './chartTypes.ts';
+import { escapeXml } from './escapeXml.ts';
+import { residualBandRows } from './residualBandRows.ts';
+
+type Scale = ScaleLinear<number, number>;
+
+/** A coordinate with 2 decimals. */
+function c(value: number): string {
+  return String(Math.round(value * 100) / 100);
+}
+
+/** Axis lines, ticks, tick labels and the two axis titles of one panel, translated by `top`. */
+function axes(x: Scale, y: Scale, height: number, xLabel: string, yLabel: string, yTicks: number): string {
+  const { width, margin } = CHART_LAYOUT;
+  const bottom = height - margin.bottom;
+  const parts: string[] = [];
+  const xFormat = x.tickFormat(8);
+  parts.push(`<path stroke="currentColor" fill="none" d="M${margin.left},${bottom}H${width - margin.right}M${margin.left},${margin.top}V${bottom}"/>`);
+  for (const tick of x.ticks(8)) {
+    const px = c(x(tick));
+    parts.push(`<line x1="${px}" x2="${px}" y1="${bottom}" y2="${bottom + 6}" stroke="currentColor"/><text x="${px}" y="${bottom + 18}" text-anchor="middle">${escapeXml(xFormat(tick))}</text>`);
+  }
+  const yFormat = y.tickFormat(yTicks);
+  for (const tick of y.ticks(yTicks)) {
+    const py = c(y(tick));
+    parts.push(`<line x1="${margin.left - 6}" x2="${margin.left}" y1="${py}" y2="${py}" stroke="currentColor"/><text x="${margin.left - 9}" y="${py}" dy="0.32em" text-anchor="end">${escapeXml(yFormat(tick))}</text>`);
+  }
+  parts.push(`<text x="${c((margin.left + width - margin.right) / 2)}" y="${height - 8}" text-anchor="middle" font-size="12">${escapeXml(xLabel)}</text>`);
+  parts.push(`<text transform="translate(14,${c((margin.top + bottom) / 2)}) rotate(-90)" text-anchor="middle" font-size="12">${escapeXml(yLabel)}</text>`);
+  return `<g font-size="10">${parts.join('')}</g>`;
+}
+
+/** Dots as one path of zero-length round-capped segments: a tenth of the bytes of one circle per point. */
+function dots(points: readonly (readonly [number, number])[], color: string, diameter: number): string {
+  if (points.length === 0) return '';
+  const d = points.map(([px, py]) => `M${c(px)},${c(py)}h0`).join('');
+  return `<path d="${d}" stroke="${color}" stroke-width="${diameter}" stroke-linecap="round" fill="none"/>`;
+}
+
+export interface RenderFitSvgOptions {
+  /** Text of the SVG's <title>; defaults to a description of what is drawn. */
+  readonly title?: string;
+}
+
+/**
+ * Render `data` as an SVG document (a string starting with "<svg").
+ * @example renderFitSvg(data).startsWith('<svg') // => true
+ */
+export function renderFitSvg(data: FitChartData, options: RenderFitSvgOptions = {}): string {
+  const { width, mainHeight, residualHeight, margin } = CHART_LAYOUT;
+  const { x, y, residual } = chartScales(data);
+  const level = Math.round(data.confidence * 100);
+  const title = options.title ?? `Data and fitted curve with ${level} % confidence and prediction bands, and the residuals below`;
+  const bars = data.points
+    .filter((p) => p.length === 6)
+    .map((p) => `M${c(x(p[1]))},${c(y(p[4]!))}V${c(y(p[5]!))}`)
+    .join('');
+  const residualRows = residualBandRows(data.curve);
+  const main = [
+    `<path d="${bandPath(data.curve, x, y, 4, 5)}" fill="${CHART_COLORS.prediction}"/>`,
+    `<path d="${bandPath(data.curve, x, y, 2, 3)}" fill="${CHART_COLORS.confidence}"/>`,
+    axes(x, y, mainHeight, data.xLabel, data.yLabel, 6),
+    `<path d="${linePath(data.curve, x, y, 1)}" fill="none" stroke="${CHART_COLORS.curve}" stroke-width="2"/>`,
+    bars === '' ? '' : `<path d="${bars}" stroke="${CHART_COLORS.point}" stroke-width="1" fill="none"/>`,
+    dots(data.points.map((p) => [x(p[1]), y(p[2])]), CHART_COLORS.point, 6),
+    ...data.excluded.map((p) => `<circle cx="${c(x(p.x))}" cy="${c(y(p.y))}" r="4.5" fill="none" stroke="${CHART_COLORS.excluded}" stroke-width="1.5"><title>row ${p.row} left out: ${escapeXml(p.reason)}</title></circle>`),
+  ].join('');
+  const zero = c(residual(0));
+  const lower = [
+    `<path d="${bandPath(residualRows, x, residual, 3, 4)}" fill="${CHART_COLORS.prediction}"/>`,
+    `<path d="${bandPath(residualRows, x, residual, 1, 2)}" fill="${CHART_COLORS.confidence}"/>`,
+    axes(x, residual, residualHeight, data.xLabel, 'residual', 4),
+    `<line x1="${margin.left}" x2="${width - margin.right}" y1="${zero}" y2="${zero}" stroke="${CHART_COLORS.zero}" stroke-dasharray="4 3"/>`,
+    dots(data.points.filter((p) => Number.isFinite(p[3])).map((p) => [x(p[1]), residual(p[3])]), CHART_COLORS.point, 6),
+  ].join('');
+  const height = mainHeight + residualHeight;
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="${width}" height="${height}" role="img" aria-labelledby="fit-svg-title" font-family="system-ui, sans-serif" color="#1d232a">` +
+    `<title id="fit-svg-title">${escapeXml(title)}</title><rect width="${width}" height="${height}" fill="#fff"/>` +
+    `<g class="fit-main">${main}</g><g class="fit-residuals" transform="translate(0,${mainHeight})">${lower}</g></svg>`
+  );
+}
