@@ -5,7 +5,7 @@
  * with its import named.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join, relative } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 
@@ -52,6 +52,19 @@ describe('architecture', () => {
     for (const file of sourceFiles(join(root, 'src/render'))) {
       for (const spec of importsOf(file)) {
         if (!(spec.startsWith('./') || spec === '../core/index.ts' || spec === 'd3-scale' || spec === 'd3-shape')) offenders.push(`${relative(root, file)} imports ${spec}`);
+      }
+      if (DOM_GLOBALS.test(readFileSync(file, 'utf8'))) offenders.push(`${relative(root, file)} uses a DOM global`);
+    }
+    expect(offenders).toEqual([]);
+  });
+
+  it('src/export is pure: it imports only src/core, src/schema and its own files (no node:*, no Astro, no I/O)', () => {
+    const offenders: string[] = [];
+    const allowed = ['src/core', 'src/schema', 'src/export'].map((folder) => join(root, folder));
+    for (const file of sourceFiles(join(root, 'src/export'))) {
+      for (const spec of importsOf(file)) {
+        const target = spec.startsWith('.') ? resolve(dirname(file), spec) : undefined;
+        if (target === undefined || !allowed.some((folder) => target.startsWith(folder))) offenders.push(`${relative(root, file)} imports ${spec}`);
       }
       if (DOM_GLOBALS.test(readFileSync(file, 'utf8'))) offenders.push(`${relative(root, file)} uses a DOM global`);
     }

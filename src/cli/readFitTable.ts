@@ -10,14 +10,17 @@ import { DATA_FILE_LIMIT_BYTES } from '../load/limits.ts';
 import { readCsv, type CsvTable } from '../load/readCsv.ts';
 import { readText } from '../load/readText.ts';
 import { NUMBER_PATTERN, tableToPoints } from '../load/tableToPoints.ts';
+import type { DataPoint } from '../schema/index.ts';
 import { CliError } from './cliError.ts';
 
 export interface FitTable {
-  readonly x: number[];
-  readonly y: number[];
-  readonly uncertainty: number[] | undefined;
-  /** 1-based file line of each point, for error messages. */
-  readonly lines: number[];
+  /** Every data row as a point (row, file line, x, y and, when a column is named, the uncertainty). */
+  readonly points: DataPoint[];
+  readonly headerLine: number;
+  /** 1-based column of the x or y cell of a data line, for messages. */
+  readonly cellColumn: (line: number, role: 'x' | 'y') => number | undefined;
+  /** Warnings about the table, e.g. a column that no option names and that is ignored. */
+  readonly warnings: Diagnostic[];
   readonly columns: { readonly x: string; readonly y: string; readonly uncertainty: string | undefined };
 }
 
@@ -60,12 +63,16 @@ export async function readFitTable(
   const points = tableToPoints(table, { file, x, y, uncertainty: names.uncertainty, replicates: true }, file, (role) => `--${role}`);
   const failure = firstError([...parsed.diagnostics, ...points.diagnostics]);
   if (failure || points.points === undefined) throw failure ?? new CliError(`${file}: cannot read the table`);
-  const used = points.points;
+  const roleIndex = { x: header.indexOf(x), y: header.indexOf(y) };
+  const rowsByLine = new Map(table.rows.map((row) => [row.line, row]));
+  const warnings = [...parsed.diagnostics, ...points.diagnostics]
+    .filter((diagnostic) => diagnostic.severity === 'warning')
+    .map((diagnostic) => ({ ...diagnostic, message: diagnostic.message.replace('is not named in the metadata and is ignored', 'is not named by --x, --y or --uncertainty and is ignored') }));
   return {
-    x: used.map((point) => point.x),
-    y: used.map((point) => point.y),
-    uncertainty: names.uncertainty === undefined ? undefined : used.map((point) => point.uncertainty!),
-    lines: used.map((point) => point.line),
+    points: points.points,
+    headerLine: table.headerLine,
+    cellColumn: (line, role) => rowsByLine.get(line)?.cells[roleIndex[role]]?.column,
+    warnings,
     columns: { x, y, uncertainty: names.uncertainty },
   };
 }

@@ -10,7 +10,7 @@ export { fitPolynomial } from './fitPolynomial.ts';
 export { fitOrders, type OrderFit } from './fitOrders.ts';
 export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';
-export { domainMap, domainMapFor, toUnit } from './domain.ts';
+export { domainMap, domainMapFor, roundToPlace, roundUpShort, shortDecimal, toUnit } from './domain.ts';
 export { mappedToPower, mappedCovarianceToPower } from './convertBasis.ts';
 export { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
 
@@ -25,6 +25,11 @@ export { bands, type BandPoint } from './stats/bands.ts';
 export { CAUTIONS, cautionsFor } from './format/cautions.ts';
 export { equationTex, equationPlain, type EquationSymbols } from './format/equation.ts';
 export { formatCoefficient } from './format/formatCoefficient.ts';
+export { formatNumber, formatP, formatRSquared, formatInterval, formatToPlace, lastDigitPlace, MISSING } from './format/formatNumber.ts';
+export { transformedXText, transformedYText } from './format/transformText.ts';
+export { plainSymbol } from './format/plainSymbol.ts';
+export { printedCoefficients } from './format/printedCoefficients.ts';
+export { statisticUnit, withStatisticUnit } from './format/statisticUnit.ts';
 export { roundSignificant } from './format/roundSignificant.ts';
 export { significantDigits } from './format/significantDigits.ts';
 

@@ -2,6 +2,7 @@
  * Checks that need both files: exclusions, point counts, transforms, repeated x, validity range and
  * pass-through points. Every message points at the line to change.
  */
+import { fixedOrderProblem } from '../core/index.ts';
 import type { CorrelationMeta, DataPoint, ExcludedPoint } from '../schema/index.ts';
 import { error, warning, type Diagnostic, type Position } from './diagnostic.ts';
 import { MINIMUM_POINTS } from './limits.ts';
@@ -67,16 +68,10 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
     diagnostics.push(error(dataPath, { line: input.headerLine }, `every point has x = ${used[0]?.x}; a correlation needs at least two different x values`));
   }
 
-  // A fixed order must leave at least one residual degree of freedom and needs order + 1 distinct x values.
+  // A fixed order: the core's one rule (fixedOrderProblem), at the order's line.
   if (typeof fit.order === 'number' && used.length >= MINIMUM_POINTS) {
-    const coefficients = (fit.intercept ? fit.order + 1 : fit.order) - fit.passThrough.length;
-    if (coefficients < 1) {
-      diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} leaves no free coefficient after ${fit.passThrough.length} pass-through points`));
-    } else if (used.length <= coefficients) {
-      diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} needs at least ${coefficients + 1} points, but ${used.length} are used`));
-    } else if (distinctX <= fit.order) {
-      diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), `order ${fit.order} needs at least ${fit.order + 1} different x values, but the data have ${distinctX}`));
-    }
+    const problem = fixedOrderProblem({ order: fit.order, intercept: fit.intercept, constraints: fit.passThrough.length, n: used.length, distinct: distinctX });
+    if (problem !== null) diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), problem));
   }
 
   // Transforms: ln needs positive values, 1/x needs non-zero x.

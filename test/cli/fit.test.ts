@@ -40,7 +40,7 @@ describe('correlary fit --json on NIST StRD', () => {
       scores.push(lre(result.residualStdDev, dataset.certified.residualStandardDeviation.value!));
       scores.push(lre(result.rSquared, dataset.certified.rSquared.value!));
       expect(Math.min(...scores)).toBeGreaterThanOrEqual(12);
-      expect(result.range).toEqual({ min: Math.min(...dataset.data.x), max: Math.max(...dataset.data.x) });
+      expect(result.range).toMatchObject({ min: Math.min(...dataset.data.x), max: Math.max(...dataset.data.x) });
       expect(result.cautions.join(' ')).toMatch(/qualified engineer/);
     });
   }
@@ -72,11 +72,11 @@ describe('correlary fit bad input', () => {
     ['empty cell', 'x,y\n1,2\n2,\n3,4\n', [], /bad\.csv:3:3: empty cell in column 'y'; every row needs a value here/],
     ['decimal comma', 'x;y\n1,5;2\n', [], /bad\.csv:1:1: fields are separated by semicolons and numbers use decimal commas, but Correlary reads only comma-separated files with '\.' decimals/],
     ['unknown column', 'x,y\n1,2\n2,3\n3,4\n', ['--y', 'cp'], /bad\.csv:1:1: header has no column 'cp' \(named by --y\); the header has: x, y$/],
-    ['constant x', 'x,y\n1,2\n1,3\n1,4\n', [], /bad\.csv: all x values are equal/],
-    ['too few points', 'x,y\n1,2\n2,3\n', [], /bad\.csv: choosing an order needs at least 3 points with 2 different x values; the data have 2 points and 2 different x values$/],
-    ['log of a negative value', 'x,y\n1,2\n2,-3\n3,4\n4,5\n', ['--transform-y', 'log'], /bad\.csv:3: y = -3 is not positive, so ln y is undefined$/],
+    ['constant x', 'x,y\n1,2\n1,3\n1,4\n', [], /bad\.csv:1: every point has x = 1; a correlation needs at least two different x values$/],
+    ['too few points', 'x,y\n1,2\n2,3\n', [], /bad\.csv:1: only 2 points are left to fit; a correlation needs at least 3$/],
+    ['log of a negative value', 'x,y\n1,2\n2,-3\n3,4\n4,5\n', ['--transform-y', 'log'], /bad\.csv:3:3: y = -3 is not positive, but --transform-y is 'log'; leave the row out with --exclude-row, or choose another transform$/],
     ['ragged row', 'x,y\n1,2\n2,3,4\n', [], /bad\.csv:3: row has 3 fields but the header has 2; a decimal comma\? write 1\.5, not 1,5/],
-    ['order too high', 'x,y\n1,2\n2,3\n3,5\n4,4\n', ['--order', '4'], /bad\.csv: /],
+    ['order too high', 'x,y\n1,2\n2,3\n3,5\n4,4\n', ['--order', '4'], /^correlary: command line: order 4 needs at least 6 points, but 4 are used$/],
   ];
   for (const [label, text, extra, expected] of cases) {
     it(`correlary fit reports ${label} in one line with file and line`, async () => {
@@ -103,7 +103,7 @@ describe('correlary fit bad input', () => {
     const result = JSON.parse(stdout);
     expect(result.n).toBe(5);
     expect(result.coefficients).toEqual([0, 0, 1]); // y = x², exact
-    expect(result.columns).toEqual({ x: 'column 1', y: 'column 2' });
+    expect(result.input.columns).toEqual({ x: 'column 1', y: 'column 2', uncertainty: null });
     // Naming a column means the file must have a header naming it.
     const named = await runCli(['fit', file, '--x', 'T', '--y', 'cp']);
     expect(named.code).toBe(1);
@@ -125,5 +125,55 @@ describe('correlary fit bad input', () => {
     expect(result.stderr).toMatch(/bin\.csv:3:3: non-numeric value 'oops' in column 'y'/);
     const ok = execFileSync(process.execPath, [bin, 'fit', csvFile('ok.csv', 'x,y\n1,1\n2,4\n3,9\n4,16\n5,25\n'), '--order', '2', '--json'], { encoding: 'utf8' });
     expect(JSON.parse(ok).coefficients).toEqual([0, 0, 1]);
+  });
+});
+
+describe('correlary command line: help, limits, warnings', () => {
+  for (const command of ['fit', 'check', 'new']) {
+    it(`correlary ${command} --help prints its usage and exits 0`, async () => {
+      const { code, stdout } = await runCli([command, '--help']);
+      expect(code).toBe(0);
+      expect(stdout).toMatch(new RegExp(`^usage: correlary ${command}`));
+    });
+  }
+
+  it('correlary fit --order accepts 0 to 12 like the content format and refuses 13', async () => {
+    const file = csvFile('limits.csv', 'x,y\n1,2\n2,3\n3,5\n4,4\n');
+    const { code, stderr } = await runCli(['fit', file, '--order', '13']);
+    expect(code).toBe(2);
+    expect(stderr).toBe("correlary: --order needs a whole number from 0 to 12, got '13'");
+    expect((await runCli(['fit', file, '--max-order', '13'])).code).toBe(2);
+  });
+
+  it('correlary fit warns about a column that no option names, as check does', async () => {
+    const file = csvFile('extra.csv', 'T,cp,comment\n1,2,a\n2,3,b\n3,5,c\n4,4,d\n5,6,e\n');
+    const { code, stderr } = await runCli(['fit', file, '--x', 'T', '--y', 'cp', '--json']);
+    expect(code).toBe(0);
+    expect(stderr).toMatch(/extra\.csv:1:\d+: warning: column 'comment' is not named by --x, --y or --uncertainty and is ignored/);
+  });
+
+  it('correlary fit honours --range, --pass-through and --exclude-row through the same checks as a folder', async () => {
+    // y = x² at x = 1..6 with row 3 spoilt (computed by hand); excluding it leaves an exact quadratic.
+    const file = csvFile('options.csv', 'x,y\n1,1\n2,4\n3,100\n4,16\n5,25\n6,36\n');
+    const { code, stdout } = await runCli(['fit', file, '--order', '2', '--exclude-row', '3', '--range', '1:5', '--pass-through', '0,0', '--json']);
+    expect(code).toBe(1); // the pass-through x = 0 is outside the validity range 1 to 5
+    expect(stdout).toBe('');
+    const ok = await runCli(['fit', file, '--order', '2', '--exclude-row', '3', '--range', '1:5', '--pass-through', '2,4', '--json']);
+    expect(ok.code).toBe(0);
+    const record = JSON.parse(ok.stdout);
+    expect(record.n).toBe(5);
+    expect(record.range).toMatchObject({ min: 1, max: 5 });
+    expect(record.passThrough).toEqual([{ x: 2, y: 4 }]);
+    expect(record.provenance.excluded.map((point: { row: number }) => point.row)).toEqual([3]);
+    record.coefficients.forEach((a: number, k: number) => expect(a).toBeCloseTo([0, 0, 1][k]!, 12));
+  });
+
+  it('correlary fit prints the mapped form and the unit words of the statistics', async () => {
+    const file = csvFile('logy.csv', 'T,p\n250,1.5\n260,2.4\n270,3.9\n280,6.1\n290,9.2\n300,13.9\n310,20.1\n');
+    const { code, stdout } = await runCli(['fit', file, '--transform-y', 'log', '--transform-x', 'reciprocal', '--order', '2']);
+    expect(code).toBe(0);
+    expect(stdout).toMatch(/mapped form .*ln\(y\) = sum of b_k \* t\^k, t = \(1\/x - [0-9.e-]+\) \/ [0-9.e-]+/);
+    expect(stdout).toMatch(/residual std\. dev\. s = \S+ \(in ln y\)/);
+    expect(stdout).not.toMatch(/Order 2, fixed: Order 2/);
   });
 });

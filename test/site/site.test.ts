@@ -159,18 +159,18 @@ describe('astro build of the demo handbook', () => {
       const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
       expect(json.cautions).toEqual(cautionsFor(correlation.range, unit, correlation.meta.variable.name));
       expect(json.cautions).toContain(CAUTIONS[1]);
-      expect(json.validityRange).toEqual({ ...correlation.range, unit: correlation.meta.variable.unit });
+      expect(json.range).toEqual({ ...correlation.range, unit: correlation.meta.variable.unit });
       expect(json.invented).toBe(correlation.meta.invented);
       if (correlation.meta.invented) expect(json.notice).toMatch(/^Invented data: /);
       // The published order is the one the loader chose.
-      expect(json.form.order).toBe(fitDataset(correlation).fit?.order);
-      const fit = expectedFit(correlation, json.form.order);
-      const published = (json.coefficients as { value: number }[]).map((row) => row.value);
+      expect(json.order).toBe(fitDataset(correlation).fit?.order);
+      const fit = expectedFit(correlation, json.order);
+      const published = json.coefficients as number[];
       expect(published.length).toBe(fit.coefficients.length);
       published.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}: ${value} vs ${fit.coefficients[k]}`).toBe(true));
       expect(json.mapped.coefficients).toEqual(fit.mapped.coefficients);
       expect(json.checkValues).toEqual(fit.checkValues);
-      expect((json.coefficients as { significantDigits: number }[]).map((row) => row.significantDigits)).toEqual(fit.significantDigits);
+      expect(json.significantDigits).toEqual(fit.significantDigits);
       expect(typeof json.equation).toBe('string');
       expect(json.provenance.source.citation).toBe(correlation.meta.source.citation);
     }
@@ -188,7 +188,7 @@ describe('astro build of the demo handbook', () => {
       expect(comments.some((line) => line.startsWith('# INVENTED DATA:'))).toBe(correlation.meta.invented);
       expect(table[0]).toBe('k,coefficient,significant_digits,rounded,standard_error,ci95_low,ci95_high');
       const json = JSON.parse(await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8'));
-      const fit = expectedFit(correlation, json.form.order);
+      const fit = expectedFit(correlation, json.order);
       const values = table.slice(1).map((line) => Number(line.split(',')[1]));
       expect(values.length).toBe(fit.coefficients.length);
       values.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}`).toBe(true));

@@ -3,11 +3,13 @@
  * selection as plain records (src/schema/correlationEntry.ts); they are the core's PolynomialFit and
  * OrderSelection, so the pages read them through these casts in one place.
  */
-import type { PolynomialFit } from '../../core/index.ts';
+import { plainSymbol, type PolynomialFit } from '../../core/index.ts';
+import { INVENTED_NOTICE } from '../../export/index.ts';
 import type { OrderSelection } from '../../core/index.ts';
 import type { CorrelationEntry, DataPoint } from '../../schema/index.ts';
 
 export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection };
+export { INVENTED_NOTICE, plainSymbol };
 
 /** The entry's fit, or null when the core refused the data. */
 export function fitOf(entry: CorrelationEntry): PolynomialFit | null {
@@ -28,14 +30,6 @@ export function usedPoints(entry: CorrelationEntry): DataPoint[] {
 /** Unit suffix for text: "" for a dimensionless quantity (unit "1"), else " unit". */
 export function unitSuffix(unit: string): string {
   return unit === '1' ? '' : ` ${unit}`;
-}
-
-/**
- * A TeX symbol as plain text for downloads and terminals: commands lose their backslash, groups their braces.
- * @example plainSymbol('\\varepsilon_{th}') // => "varepsilon_th"; plainSymbol('\\Delta h_{lv}') // => "Delta h_lv"
- */
-export function plainSymbol(tex: string): string {
-  return tex.replace(/\\[,;:! ]/g, ' ').replace(/\\([A-Za-z]+)/g, '$1').replace(/[{}]/g, '').replace(/\s+/g, ' ').trim();
 }
 
 const GREEK: Record<string, string> = {
@@ -59,22 +53,6 @@ export function rangeText(entry: CorrelationEntry): string {
   const unit = unitSuffix(entry.meta.variable.unit);
   return `${entry.range.min}${unit} ≤ ${plainSymbol(entry.meta.variable.symbol)} ≤ ${entry.range.max}${unit}`;
 }
-
-/** The fitted variable u in words, e.g. "u = 1/T". */
-export function transformXText(fit: Pick<PolynomialFit, 'transformX'>, symbol: string): string {
-  if (fit.transformX === 'reciprocal') return `1/${symbol}`;
-  if (fit.transformX === 'log') return `ln(${symbol})`;
-  return symbol;
-}
-
-/** The fitted response v in words, e.g. "ln(mu)". */
-export function transformYText(fit: Pick<PolynomialFit, 'transformY'>, symbol: string): string {
-  return fit.transformY === 'log' ? `ln(${symbol})` : symbol;
-}
-
-/** Notice carried by every page and download of invented demonstration data. */
-export const INVENTED_NOTICE =
-  'Invented data: this correlation is fitted to made-up demonstration numbers. It describes no real substance and must not be used for any engineering purpose.';
 
 /** The notice without its "Invented data: " lead, for pages that set the lead in bold. */
 export const INVENTED_NOTICE_BODY = INVENTED_NOTICE.replace(/^Invented data: (.)/, (_, first: string) => first.toUpperCase());

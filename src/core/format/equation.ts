@@ -3,6 +3,7 @@
  * text for the terminal. Coefficients carry the digits that significantDigits asks for.
  */
 import { formatCoefficient } from './formatCoefficient.ts';
+import { transformedXText, transformedYText } from './transformText.ts';
 import type { PolynomialFit } from '../types.ts';
 
 export interface EquationSymbols {
@@ -12,16 +13,10 @@ export interface EquationSymbols {
   readonly y: string;
 }
 
-function variableTex(fit: PolynomialFit, x: string): string {
-  if (fit.transformX === 'reciprocal') return `(1/${x})`;
-  if (fit.transformX === 'log') return `(\\ln ${x})`;
-  return x;
-}
-
-function variablePlain(fit: PolynomialFit, x: string): string {
-  if (fit.transformX === 'reciprocal') return `(1/${x})`;
-  if (fit.transformX === 'log') return `ln(${x})`;
-  return x;
+/** u as a factor of a power: bare for identity, in parentheses otherwise ("(1/T)", "(\\ln T)", "ln(T)"). */
+function variableFactor(fit: PolynomialFit, x: string, style: 'plain' | 'tex'): string {
+  const text = transformedXText(fit.transformX, x, style);
+  return fit.transformX === 'identity' || (style === 'plain' && fit.transformX === 'log') ? text : `(${text})`;
 }
 
 function texNumber(text: string): string {
@@ -31,8 +26,8 @@ function texNumber(text: string): string {
 
 /** TeX of v = Σ a_k u^k, e.g. "c_p = 1.23 + 4.5\\times10^{-3}\\,T". */
 export function equationTex(fit: PolynomialFit, symbols: EquationSymbols): string {
-  const u = variableTex(fit, symbols.x);
-  const lhs = fit.transformY === 'log' ? `\\ln ${symbols.y}` : symbols.y;
+  const u = variableFactor(fit, symbols.x, 'tex');
+  const lhs = transformedYText(fit.transformY, symbols.y, 'tex');
   const terms: string[] = [];
   fit.coefficients.forEach((a, k) => {
     if (k === 0 && !fit.intercept) return;
@@ -46,8 +41,8 @@ export function equationTex(fit: PolynomialFit, symbols: EquationSymbols): strin
 
 /** Plain-text equation for terminals, e.g. "y = 1.23 + 4.5e-3*x - 6.7e-6*x^2". */
 export function equationPlain(fit: PolynomialFit, symbols: EquationSymbols): string {
-  const u = variablePlain(fit, symbols.x);
-  const lhs = fit.transformY === 'log' ? `ln(${symbols.y})` : symbols.y;
+  const u = variableFactor(fit, symbols.x, 'plain');
+  const lhs = transformedYText(fit.transformY, symbols.y, 'plain');
   const terms: string[] = [];
   fit.coefficients.forEach((a, k) => {
     if (k === 0 && !fit.intercept) return;

@@ -15,7 +15,7 @@
  * // => 10·ln(1) + 10·12/6 = 20
  */
 import { argminOrder } from './argminOrder.ts';
-import { fitOfOrder, formatNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
+import { fitOfOrder, reasonNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
 
 /** AICc of one fit (NaN when n − p − 2 ≤ 0). */
 export function aiccOf(n: number, fit: OrderSummary): number {
@@ -33,6 +33,6 @@ export const aiccCriterion: OrderCriterion = {
     return argminOrder(table, (order) => aiccOf(table.n, fitOfOrder(table, order)));
   },
   explain(table: CandidateTable, order: number): string {
-    return `Order ${order} has the smallest AICc = ${formatNumber(aiccOf(table.n, fitOfOrder(table, order)))} among the orders where AICc is defined (n − p − 2 > 0).`;
+    return `Order ${order} has the smallest AICc = ${reasonNumber(aiccOf(table.n, fitOfOrder(table, order)))} among the orders where AICc is defined (n − p − 2 > 0).`;
   },
 };

@@ -15,7 +15,7 @@
  * @example
  * allHigherFCriterion.choose(table) // => lowest m with p ≥ 0.05 against every k in (m, maxCandidate]
  */
-import { fitOfOrder, formatNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
+import { fitOfOrder, reasonNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
 import { extraSumOfSquaresF, extraSumOfSquaresP, isSignificant } from './extraSumOfSquaresF.ts';
 
 /** Significance level of each comparison. */
@@ -53,6 +53,6 @@ export const allHigherFCriterion: OrderCriterion = {
         statistic = test.statistic;
       }
     }
-    return `Order ${order}: no higher order up to ${table.maxCandidate} improves on it significantly (smallest ${pText(smallestP)} ≥ 0.05, against order ${against}, F = ${formatNumber(statistic)}).`;
+    return `Order ${order}: no higher order up to ${table.maxCandidate} improves on it significantly (smallest ${pText(smallestP)} ≥ 0.05, against order ${against}, F = ${reasonNumber(statistic)}).`;
   },
 };

@@ -11,7 +11,7 @@
  * bicOf(10, { order: 1, parameters: 2, degreesOfFreedom: 8, residualSumOfSquares: 10, press: 0 }) // => 2·ln 10 = 4.605
  */
 import { argminOrder } from './argminOrder.ts';
-import { fitOfOrder, formatNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
+import { fitOfOrder, reasonNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
 
 /** BIC of one fit. */
 export function bicOf(n: number, fit: OrderSummary): number {
@@ -27,6 +27,6 @@ export const bicCriterion: OrderCriterion = {
     return argminOrder(table, (order) => bicOf(table.n, fitOfOrder(table, order)));
   },
   explain(table: CandidateTable, order: number): string {
-    return `Order ${order} has the smallest BIC = ${formatNumber(bicOf(table.n, fitOfOrder(table, order)))} among orders ${table.minCandidate} to ${table.maxCandidate}.`;
+    return `Order ${order} has the smallest BIC = ${reasonNumber(bicOf(table.n, fitOfOrder(table, order)))} among orders ${table.minCandidate} to ${table.maxCandidate}.`;
   },
 };

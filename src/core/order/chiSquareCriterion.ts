@@ -18,7 +18,7 @@
  */
 import { chiSquareQuantile, chiSquareUpperP } from '../distributions.ts';
 import { argminOrder } from './argminOrder.ts';
-import { fitOfOrder, formatNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
+import { fitOfOrder, reasonNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
 
 /** Confidence level of the χ² acceptance bound. */
 export const CHI_SQUARE_LEVEL = 0.95;
@@ -79,10 +79,10 @@ export function createChiSquareCriterion(minResidualDof: number): OrderCriterion
       const bound = chiSquareBound(fit.degreesOfFreedom);
       const p = chiSquareUpperP(chiSquare, fit.degreesOfFreedom);
       if (chiSquare <= bound) {
-        const lowerNote = order > table.minCandidate ? `, and order ${order - 1} is not (χ² = ${formatNumber(fitOfOrder(table, order - 1).residualSumOfSquares)})` : '';
-        return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${formatNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${formatNumber(bound)} (${pText(p)})${lowerNote}.`;
+        const lowerNote = order > table.minCandidate ? `, and order ${order - 1} is not (χ² = ${reasonNumber(fitOfOrder(table, order - 1).residualSumOfSquares)})` : '';
+        return `Order ${order} is the lowest consistent with the stated uncertainties: χ² = ${reasonNumber(chiSquare)} ≤ χ²₀.₉₅(${fit.degreesOfFreedom}) = ${reasonNumber(bound)} (${pText(p)})${lowerNote}.`;
       }
-      return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${formatNumber(chiSquare / fit.degreesOfFreedom)} (${pText(p)}).`;
+      return `No order is consistent with the stated uncertainties; order ${order} has the smallest reduced χ² = ${reasonNumber(chiSquare / fit.degreesOfFreedom)} (${pText(p)}).`;
     },
   };
 }

@@ -6,6 +6,7 @@
  * criterion lives in its own file with its formula and reference; `choose` is the fast decision and
  * `explain` writes the one-sentence reason a reviewer can check against the order table.
  */
+import { formatNumber, formatP } from '../format/formatNumber.ts';
 
 /** Names of the built-in criteria. */
 export type CriterionName =
@@ -79,20 +80,12 @@ export function residualVarianceOf(fit: OrderSummary): number {
   return fit.degreesOfFreedom > 0 ? fit.residualSumOfSquares / fit.degreesOfFreedom : Number.NaN;
 }
 
-/** Format a number for a reason sentence: 3 significant digits, exponent form when tiny or huge. */
-export function formatNumber(value: number): string {
-  if (!Number.isFinite(value)) return String(value);
-  if (value === 0) return '0';
-  const magnitude = Math.abs(value);
-  if (magnitude < 1e-3 || magnitude >= 1e6) return value.toExponential(2);
-  return String(Number(value.toPrecision(3)));
+/** A number in a reason sentence: three significant digits (the shared rule of format/formatNumber.ts). @example reasonNumber(0.012345) // => "0.0123" */
+export function reasonNumber(value: number): string {
+  return formatNumber(value, 3);
 }
 
-/** Format a probability: 2 significant digits, "< 0.0001" below that. */
-export function formatP(p: number): string {
-  if (p < 1e-4) return '< 0.0001';
-  return String(Number(p.toPrecision(2)));
-}
+export { formatP };
 
 /** "p = 0.38" or "p < 0.0001", for reason sentences. */
 export function pText(p: number): string {

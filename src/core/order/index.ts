@@ -7,6 +7,7 @@ export { selectOrder, type OrderSelection, type SelectOrderOptions } from './sel
 export { orderRows, type OrderRow } from './orderRow.ts';
 export { DEFAULT_MAX_ORDER, maxCandidateOrder } from './maxCandidateOrder.ts';
 export { isFlat } from './isFlat.ts';
+export { fixedOrderProblem, ORDER_LIMIT, type FixedOrderCase } from './fixedOrderProblem.ts';
 
 // nested fits (one QR for every order)
 export { fitNestedOrders, RESIDUAL_FLOOR_RELATIVE, type NestedFits, type NestedOrderFit, type NestedFitOptions } from './nestedFits.ts';
@@ -15,7 +16,6 @@ export { candidateTable, type CandidateRange } from './candidateTable.ts';
 // criteria: interface, registry, default
 export {
   fitOfOrder,
-  formatP,
   pText,
   residualVarianceOf,
   type CandidateTable,

@@ -31,7 +31,7 @@
  * @example
  * lowestJustifiedCriterion.choose(table) // => 3 for cubic data with small noise
  */
-import { fitOfOrder, formatNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
+import { fitOfOrder, reasonNumber, formatP, pText, type CandidateTable, type OrderCriterion } from './criterion.ts';
 import { extraSumOfSquaresF, extraSumOfSquaresP, isSignificant } from './extraSumOfSquaresF.ts';
 
 /** Tunable parameters of the default rule. */
@@ -134,16 +134,16 @@ function comparisonsOf(table: CandidateTable, parameters: LowestJustifiedParamet
     const test = extraSumOfSquaresF(lower, higher);
     const level = comparisonLevel(parameters, higher.degreesOfFreedom, comparisons);
     const reduction = 1 - higher.residualSumOfSquares / lower.residualSumOfSquares;
-    parts.push(`order ${candidate} lowers S_r by ${formatNumber(100 * reduction)} % (F = ${formatNumber(test.statistic)}, ${pText(extraSumOfSquaresP(test))} ≥ ${formatP(level)})`);
+    parts.push(`order ${candidate} lowers S_r by ${reasonNumber(100 * reduction)} % (F = ${reasonNumber(test.statistic)}, ${pText(extraSumOfSquaresP(test))} ≥ ${formatP(level)})`);
   }
   return parts;
 }
 
 function describeImprovement(order: number, improvement: Improvement): string {
   if (improvement.kind === 'significant') {
-    return `order ${order} is improved on by order ${improvement.against} (F = ${formatNumber(improvement.statistic)}, ${pText(improvement.p)}, significant at ${formatP(improvement.level)})`;
+    return `order ${order} is improved on by order ${improvement.against} (F = ${reasonNumber(improvement.statistic)}, ${pText(improvement.p)}, significant at ${formatP(improvement.level)})`;
   }
-  return `order ${order} is improved on by order ${improvement.against}, which predicts left-out points ${formatNumber(100 * (improvement.looRatio - 1))} % better (F = ${formatNumber(improvement.statistic)}, ${pText(improvement.p)})`;
+  return `order ${order} is improved on by order ${improvement.against}, which predicts left-out points ${reasonNumber(100 * (improvement.looRatio - 1))} % better (F = ${reasonNumber(improvement.statistic)}, ${pText(improvement.p)})`;
 }
 
 /**

@@ -13,7 +13,7 @@
  * looRmseOf(table.n, fitOfOrder(table, 2)) // => √(PRESS(2)/n)
  */
 import { argminOrder } from './argminOrder.ts';
-import { fitOfOrder, formatNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
+import { fitOfOrder, reasonNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
 
 /** Leave-one-out RMSE √(PRESS/n). */
 export function looRmseOf(n: number, fit: OrderSummary): number {
@@ -29,6 +29,6 @@ export const pressCriterion: OrderCriterion = {
     return argminOrder(table, (order) => fitOfOrder(table, order).press);
   },
   explain(table: CandidateTable, order: number): string {
-    return `Order ${order} has the smallest leave-one-out RMSE = ${formatNumber(looRmseOf(table.n, fitOfOrder(table, order)))} among orders ${table.minCandidate} to ${table.maxCandidate}.`;
+    return `Order ${order} has the smallest leave-one-out RMSE = ${reasonNumber(looRmseOf(table.n, fitOfOrder(table, order)))} among orders ${table.minCandidate} to ${table.maxCandidate}.`;
   },
 };

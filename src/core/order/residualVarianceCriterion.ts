@@ -12,7 +12,7 @@
  * residualVarianceCriterion.choose(table) // => the order with the smallest S_r/(n − p)
  */
 import { argminOrder } from './argminOrder.ts';
-import { fitOfOrder, formatNumber, residualVarianceOf, type CandidateTable, type OrderCriterion } from './criterion.ts';
+import { fitOfOrder, reasonNumber, residualVarianceOf, type CandidateTable, type OrderCriterion } from './criterion.ts';
 
 export const residualVarianceCriterion: OrderCriterion = {
   name: 'residualVariance',
@@ -24,6 +24,6 @@ export const residualVarianceCriterion: OrderCriterion = {
   },
   explain(table: CandidateTable, order: number): string {
     const value = residualVarianceOf(fitOfOrder(table, order));
-    return `Order ${order} has the smallest residual variance S_r/(n − p) = ${formatNumber(value)} among orders ${table.minCandidate} to ${table.maxCandidate}.`;
+    return `Order ${order} has the smallest residual variance S_r/(n − p) = ${reasonNumber(value)} among orders ${table.minCandidate} to ${table.maxCandidate}.`;
   },
 };

@@ -20,7 +20,8 @@ import { validateFitData } from '../validateFitInput.ts';
 import { fittedSpaceWeights, forwardX, forwardY, transformData } from '../transforms.ts';
 import type { DomainMap, FitData, PointConstraint, TransformX, TransformY } from '../types.ts';
 import { candidateTable } from './candidateTable.ts';
-import { fitOfOrder, formatNumber, type CriterionName } from './criterion.ts';
+import { fitOfOrder, reasonNumber, type CriterionName } from './criterion.ts';
+import { fixedOrderProblem } from './fixedOrderProblem.ts';
 import { isFlat } from './isFlat.ts';
 import { DEFAULT_MAX_ORDER, maxCandidateOrder } from './maxCandidateOrder.ts';
 import { fitConstrainedOrders } from './constrainedFits.ts';
@@ -95,17 +96,14 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
   const n = u.length;
   const distinct = new Set(u).size;
   const maxCandidate = maxCandidateOrder(n, distinct, options.maxOrder ?? DEFAULT_MAX_ORDER);
-  const lowestOrder = intercept ? 0 : 1;
   if (maxCandidate < 1) {
     throw new FitError('too-few-points', `choosing an order needs at least 3 points with 2 different x values; the data have ${n} points and ${distinct} different x values`);
   }
   let fitMax = maxCandidate;
   if (options.fixedOrder !== undefined) {
     const fixed = options.fixedOrder;
-    const highestIdentifiable = Math.min(n - 1, distinct - 1);
-    if (!Number.isInteger(fixed) || fixed < lowestOrder || fixed > highestIdentifiable) {
-      throw new FitError('order-too-high', `order ${fixed} cannot be fitted: with ${n} points and ${distinct} different x values the order must be between ${lowestOrder} and ${highestIdentifiable}`);
-    }
+    const problem = fixedOrderProblem({ order: fixed, intercept, constraints: options.constraints?.length ?? 0, n, distinct });
+    if (problem !== null) throw new FitError('order-too-high', `${problem}`);
     fitMax = Math.max(fitMax, fixed);
   }
 
@@ -151,7 +149,7 @@ export function selectOrder(data: FitData, options: SelectOrderOptions = {}): Or
     const dof = chosenFit.degreesOfFreedom;
     const reduced = chosenFit.residualSumOfSquares / dof;
     if (reason.startsWith('No order')) {
-      warnings.push(`No candidate order is consistent with the stated uncertainties (smallest reduced χ² = ${formatNumber(reduced)}).`);
+      warnings.push(`No candidate order is consistent with the stated uncertainties (smallest reduced χ² = ${reasonNumber(reduced)}).`);
     }
   }
 

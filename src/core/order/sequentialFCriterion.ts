@@ -14,7 +14,7 @@
  * @example
  * sequentialFCriterion.choose(table) // => first m whose step to m + 1 has p ≥ 0.05
  */
-import { fitOfOrder, formatNumber, formatP, pText, residualVarianceOf, type CandidateTable, type OrderCriterion } from './criterion.ts';
+import { fitOfOrder, reasonNumber, formatP, pText, residualVarianceOf, type CandidateTable, type OrderCriterion } from './criterion.ts';
 import { extraSumOfSquaresF, extraSumOfSquaresP, isSignificant } from './extraSumOfSquaresF.ts';
 
 /** Significance level of each forward step. */
@@ -40,7 +40,7 @@ export const sequentialFCriterion: OrderCriterion = {
     const higher = fitOfOrder(table, order + 1);
     const test = extraSumOfSquaresF(lower, higher);
     const change = 1 - residualVarianceOf(higher) / residualVarianceOf(lower);
-    const direction = change >= 0 ? `lowers the residual variance by ${formatNumber(100 * change)} %` : `raises the residual variance by ${formatNumber(-100 * change)} %`;
-    return `Order ${order}: going to order ${order + 1} ${direction}, not significant (F = ${formatNumber(test.statistic)}, ${pText(extraSumOfSquaresP(test))} ≥ 0.05).`;
+    const direction = change >= 0 ? `lowers the residual variance by ${reasonNumber(100 * change)} %` : `raises the residual variance by ${reasonNumber(-100 * change)} %`;
+    return `Order ${order}: going to order ${order + 1} ${direction}, not significant (F = ${reasonNumber(test.statistic)}, ${pText(extraSumOfSquaresP(test))} ≥ 0.05).`;
   },
 };

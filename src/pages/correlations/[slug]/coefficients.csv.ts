@@ -1,12 +1,12 @@
 /** `/correlations/<slug>/coefficients.csv`: `#` comment lines (cautions, provenance), then the coefficient table. */
 import type { APIRoute, GetStaticPaths } from 'astro';
 import { correlationPaths } from '../../../components/lib/correlationPaths.ts';
-import { coefficientsCsv } from '../../../components/lib/coefficientsDownload.ts';
+import { entryRecord } from '../../../components/lib/entryRecord.ts';
 import type { CorrelationEntry } from '../../../components/lib/entryView.ts';
+import { coefficientsCsv } from '../../../export/index.ts';
 
 export const getStaticPaths = (() => correlationPaths({ fittedOnly: true })) satisfies GetStaticPaths;
 
 export const GET: APIRoute<{ entry: CorrelationEntry }> = ({ props }) => {
-  const { entry } = props;
-  return new Response(coefficientsCsv(entry), { headers: { 'Content-Type': 'text/csv; charset=utf-8' } });
+  return new Response(coefficientsCsv(entryRecord(props.entry)), { headers: { 'Content-Type': 'text/csv; charset=utf-8' } });
 };

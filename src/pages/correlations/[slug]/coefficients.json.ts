@@ -1,14 +1,13 @@
-/** `/correlations/<slug>/coefficients.json`: coefficients, cautions and provenance of one correlation, built statically. */
+/** `/correlations/<slug>/coefficients.json`: the export record of one correlation (src/export), built statically. */
 import type { APIRoute, GetStaticPaths } from 'astro';
 import { correlationPaths } from '../../../components/lib/correlationPaths.ts';
-import { coefficientsJson } from '../../../components/lib/coefficientsDownload.ts';
+import { entryRecord } from '../../../components/lib/entryRecord.ts';
 import type { CorrelationEntry } from '../../../components/lib/entryView.ts';
 
 export const getStaticPaths = (() => correlationPaths({ fittedOnly: true })) satisfies GetStaticPaths;
 
 export const GET: APIRoute<{ entry: CorrelationEntry }> = ({ props }) => {
-  const { entry } = props;
-  return new Response(`${JSON.stringify(coefficientsJson(entry), null, 2)}\n`, {
+  return new Response(`${JSON.stringify(entryRecord(props.entry), null, 2)}\n`, {
     headers: { 'Content-Type': 'application/json; charset=utf-8' },
   });
 };
