@@ -146,6 +146,32 @@ describe('astro build of the demo handbook', () => {
     }
   });
 
+  it('every correlation page stays under 100 KB of HTML, the 2000-point one included, and data.csv holds every row', async () => {
+    const big = correlations.reduce((a, b) => (b.points.length > a.points.length ? b : a));
+    expect(big.points.length).toBeGreaterThanOrEqual(2000);
+    for (const correlation of correlations) {
+      const bytes = Buffer.byteLength(await page(correlation.slug));
+      expect(bytes, `${correlation.slug}: ${bytes} bytes`).toBeLessThan(100_000);
+      const csv = await readFile(path.join(outDir, 'correlations', correlation.slug, 'data.csv'), 'utf8');
+      const lines = csv.trimEnd().split('\n');
+      const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
+      for (const caution of cautionsFor(correlation.range, unit, correlation.meta.variable.name)) expect(lines).toContain(`# CAUTION: ${caution}`);
+      const table = lines.filter((line) => !line.startsWith('#'));
+      expect(table[0]).toBe('row,line,x,y,uncertainty,used,residual,studentized,leverage,cooks_distance,excluded_reason,note');
+      expect(table).toHaveLength(correlation.points.length + 1);
+      // x and y as read from the data file, row by row.
+      table.slice(1).forEach((line, i) => {
+        const fields = line.split(',');
+        expect(Number(fields[2]), `${correlation.slug} row ${i + 1}`).toBe(correlation.points[i]!.x);
+        expect(Number(fields[3]), `${correlation.slug} row ${i + 1}`).toBe(correlation.points[i]!.y);
+      });
+    }
+    // The big page lists its first 50 rows, and says where the rest are.
+    const html = await page(big.slug);
+    expect(html).toContain(`href="/correlations/${big.slug}/data.csv"`);
+    expect(html).toContain(`Rows 1–50 and every flagged row`);
+  });
+
   it('the order page sets the F statistic in KaTeX like every other formula', async () => {
     const html = await readFile(path.join(outDir, 'how-orders-are-chosen', 'index.html'), 'utf8');
     expect(html).toContain('class="katex-display"');

@@ -1,0 +1,61 @@
+/**
+ * The data download `data.csv` of one correlation: the cautions and provenance as `#` comment lines, then every
+ * data row as read (x and y as written, shortest round-trip text) with its diagnostics from the fit and, for rows
+ * left out, the reason. Text fields that a spreadsheet would run as a formula (leading =, +, -, @, tab or carriage
+ * return) are quoted and prefixed with an apostrophe, common practice for CSV exports.
+ */
+import { cautionsFor } from '../../core/index.ts';
+import { dataRows } from './dataRows.ts';
+import { INVENTED_NOTICE, unitSuffix, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
+
+/** Quote a CSV field when it needs it (RFC 4180); neutralise a leading formula character in text. */
+function textField(text: string): string {
+  const safe = /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+  return /[",\r\n']/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
+}
+
+function numberField(value: number | undefined): string {
+  return value === undefined || !Number.isFinite(value) ? '' : String(value);
+}
+
+function comment(text: string): string {
+  return `# ${text.replace(/\s*[\r\n]+\s*/g, ' ')}`;
+}
+
+/**
+ * @example dataCsv(entry, fit).split('\n').find((line) => !line.startsWith('#')) // => "row,line,x,y,uncertainty,used,…"
+ */
+export function dataCsv(entry: CorrelationEntry, fit: PolynomialFit): string {
+  const { meta } = entry;
+  const lines: string[] = [];
+  if (meta.invented) lines.push(comment(INVENTED_NOTICE.replace(/^Invented data:/, 'INVENTED DATA:')));
+  const unit = unitSuffix(meta.variable.unit).trim();
+  for (const caution of cautionsFor(entry.range, unit, meta.variable.name)) lines.push(comment(`CAUTION: ${caution}`));
+  lines.push(comment(`Title: ${meta.title}`));
+  lines.push(comment(`x: ${meta.variable.name} [${meta.variable.unit}]; y: ${meta.property.name} [${meta.property.unit}]; values as written in the data file`));
+  lines.push(comment(`Source: ${meta.source.citation}`));
+  lines.push(comment(`Diagnostics of the order-${fit.order} fit: residual = y - fitted y [${meta.property.unit}]; empty for rows left out`));
+  lines.push('row,line,x,y,uncertainty,used,residual,studentized,leverage,cooks_distance,excluded_reason,note');
+  const byRow = new Map(dataRows(entry, fit).map((row) => [row.point.row, row]));
+  const excluded = new Map(entry.excluded.map((point) => [point.row, point.reason]));
+  for (const point of entry.points) {
+    const row = byRow.get(point.row);
+    lines.push(
+      [
+        String(point.row),
+        String(point.line),
+        String(point.x),
+        String(point.y),
+        numberField(point.uncertainty),
+        row ? 'yes' : 'no',
+        numberField(row?.residual),
+        numberField(row?.studentized),
+        numberField(row?.leverage),
+        numberField(row?.cook),
+        textField(excluded.get(point.row) ?? ''),
+        textField(point.note ?? ''),
+      ].join(','),
+    );
+  }
+  return `${lines.join('\n')}\n`;
+}
