@@ -1,9 +1,39 @@
 // Astro configuration for the handbook site. No numerics live here: fitting happens in src/core,
 // called from the content loader at build time.
+//
+// The site address and base path come from the handbook's settings file (`handbook.yaml` at the content root; see
+// content/README.md). `correlary build --content DIR --base PATH` and other build tools override them:
+//   CORRELARY_CONTENT  content directory (default `content`), relative to this file or absolute
+//   CORRELARY_SITE     site address, e.g. https://handbook.example.org (overrides `url`)
+//   CORRELARY_BASE     base path, e.g. /handbook/ (overrides `basePath`)
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'astro/config';
+import { basePathSchema, siteUrlSchema } from './src/schema/index.ts';
+import { contentDirectory, formatDiagnostic, readHandbookSettings } from './src/load/index.ts';
+
+// A BASE_URL in the environment (test runners set one) would replace import.meta.env.BASE_URL in the pages and
+// point every link at the wrong base path; the base path comes from the settings below, never from there.
+delete process.env.BASE_URL;
+
+const root = fileURLToPath(new URL('.', import.meta.url));
+const content = path.relative(process.cwd(), path.resolve(root, contentDirectory())) || '.';
+const { settings, diagnostics } = await readHandbookSettings(content);
+for (const problem of diagnostics) console.error(formatDiagnostic(problem));
+if (settings === undefined) throw new Error(`the handbook settings file has ${diagnostics.length} problem(s); see the lines above`);
+
+/** An override from the environment, checked like the settings file would be. */
+function override(name, schema) {
+  const value = process.env[name]?.trim();
+  if (!value) return undefined;
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) throw new Error(`${name}=${value}: ${parsed.error.issues[0]?.message ?? 'is not valid'}`);
+  return parsed.data;
+}
 
 export default defineConfig({
-  site: 'http://localhost:4321',
+  site: override('CORRELARY_SITE', siteUrlSchema) ?? settings.url,
+  base: override('CORRELARY_BASE', basePathSchema) ?? settings.basePath,
   trailingSlash: 'ignore',
   build: { format: 'directory' },
 });

@@ -16,7 +16,7 @@ import { packageRoot } from './packageRoot.ts';
 export const BUILD_USAGE = `usage: correlary build [--content DIR] [--out DIR] [--base PATH]
   --content DIR   handbook folder to build (default: content)
   --out DIR       folder the static site is written to (default: dist)
-  --base PATH     URL path the site is served under, e.g. /handbook/ (default: /)`;
+  --base PATH     URL path the site is served under, e.g. /handbook/ (default: basePath in DIR/handbook.yaml, else /)`;
 
 export interface BuildArguments {
   readonly content: string;

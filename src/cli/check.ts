@@ -19,7 +19,8 @@ function short(value: number): string {
 function summaryLine(slug: string, fit: PolynomialFit, criterion: string, unit: string): string {
   const residual = short(fit.statistics.residualStdDev);
   // Weighted residuals are divided by each point's uncertainty, so s is a pure number (1 = scatter as stated).
-  const s = fit.weighted ? `${residual} (weighted, 1 = scatter as stated)` : fit.transformY === 'log' ? `${residual} (in ln y)` : `${residual} ${unit}`;
+  // A dimensionless property (unit "1") gets no unit after s: "s = 0.0884", not "s = 0.0884 1".
+  const s = fit.weighted ? `${residual} (weighted, 1 = scatter as stated)` : fit.transformY === 'log' ? `${residual} (in ln y)` : unit === '1' ? residual : `${residual} ${unit}`;
   const r2 = fit.statistics.rSquared;
   return `${slug}: n = ${fit.statistics.n}, order ${fit.order} (${criterion}), s = ${s}, R² = ${Number.isFinite(r2) ? r2.toFixed(6) : String(r2)}`;
 }

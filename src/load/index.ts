@@ -5,6 +5,8 @@
 // reading
 export { readHandbook, type HandbookResult } from './readHandbook.ts';
 export { readDataset } from './readDataset.ts';
+export { readHandbookSettings, type HandbookSettingsResult } from './readHandbookSettings.ts';
+export { contentDirectory, CONTENT_DIRECTORY_VARIABLE } from './contentDirectory.ts';
 export type { DatasetResult, LoadedCorrelation } from './types.ts';
 
 // fitting a loaded correlation

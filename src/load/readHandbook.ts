@@ -1,18 +1,22 @@
 /**
- * Read every correlation folder under a content directory and check that slugs are unique.
+ * Read every correlation folder under a content directory and check that slugs are unique; read the handbook's
+ * settings file (`handbook.yaml`, a file at the top level, so never taken for a correlation folder).
  */
 import { readdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { SLUG_PATTERN } from '../schema/index.ts';
 import { error, type Diagnostic } from './diagnostic.ts';
 import { readDataset } from './readDataset.ts';
+import { readHandbookSettings, type HandbookSettingsResult } from './readHandbookSettings.ts';
 import type { DatasetResult } from './types.ts';
 
 export interface HandbookResult {
   /** One result per folder, sorted by folder name. */
   readonly datasets: readonly DatasetResult[];
-  /** Problems that concern more than one folder (duplicate slugs) or the directory itself. */
+  /** Problems that concern more than one folder (duplicate slugs), the directory itself or its settings file. */
   readonly diagnostics: readonly Diagnostic[];
+  /** The handbook settings file: its validated values (defaults when absent) and where it is. */
+  readonly settings: HandbookSettingsResult;
 }
 
 /**
@@ -29,7 +33,8 @@ export async function readHandbook(directory: string): Promise<HandbookResult> {
     .map((entry) => entry.name)
     .sort();
   const datasets = await Promise.all(folders.map((name) => readDataset(path.join(directory, name))));
-  const diagnostics: Diagnostic[] = [];
+  const settings = await readHandbookSettings(directory);
+  const diagnostics: Diagnostic[] = [...settings.diagnostics];
 
   const bySlug = new Map<string, DatasetResult[]>();
   for (const dataset of datasets) {
@@ -47,5 +52,5 @@ export async function readHandbook(directory: string): Promise<HandbookResult> {
       diagnostics.push(error(dataset.metadataPath, { line: dataset.slugLine }, `slug '${slug}' is also used by ${others.join(', ')}`, 'set a different slug: in one of them'));
     }
   }
-  return { datasets, diagnostics };
+  return { datasets, diagnostics, settings };
 }

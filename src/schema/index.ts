@@ -6,6 +6,17 @@
 export { correlationMetaSchema, statedUncertaintySchema, METADATA_FILE, SLUG_PATTERN } from './correlationMeta.ts';
 export type { CorrelationMeta, CorrelationMetaInput } from './correlationMeta.ts';
 
+// handbook settings file
+export {
+  handbookSettingsSchema,
+  basePathSchema,
+  siteUrlSchema,
+  HANDBOOK_SETTINGS_FILE,
+  DEFAULT_HANDBOOK_TITLE,
+  DEFAULT_SITE_URL,
+} from './handbookSettings.ts';
+export type { HandbookSettings } from './handbookSettings.ts';
+
 // building blocks
 export { quantitySchema } from './quantity.ts';
 export type { Quantity } from './quantity.ts';

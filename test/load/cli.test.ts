@@ -49,6 +49,18 @@ describe('runCheck(args)', () => {
     ]);
   });
 
+  it('runCheck prints s with no unit for a dimensionless property (unit "1")', async () => {
+    const directory = await scratch();
+    await cp(`${FIXTURES}/valid/liquid-a`, path.join(directory, 'liquid-a'), { recursive: true });
+    const metadata = path.join(directory, 'liquid-a', 'correlation.yaml');
+    const text = await readFile(metadata, 'utf8');
+    expect(text).toContain('unit: J/(kg·K)');
+    await writeFile(metadata, text.replace('unit: J/(kg·K)', 'unit: "1"'));
+    expect(await runCheck([directory])).toBe(0);
+    // Same data as the valid fixture above, so the same s; only the unit after it goes.
+    expect(printed[0]).toBe('liquid-a: n = 8, order 2 (lowestJustified), s = 0.09862, R² = 0.999994');
+  });
+
   it('runCheck([duplicate-x]) prints the warning and still exits 0', async () => {
     expect(await runCheck([`${FIXTURES}/duplicate-x`])).toBe(0);
     expect(printed[0]).toMatch(/^test\/fixtures\/content\/duplicate-x\/liquid-a\/data.csv:10: warning: x = 300 repeats line 4/);

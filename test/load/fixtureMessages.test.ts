@@ -119,6 +119,15 @@ const CASES: [string, string[]][] = [
   ['order-too-high', [
     "liquid-a/correlation.yaml:24:10: order 9 needs at least 11 points, but 8 are used",
   ]],
+  ['settings-bad', [
+    "handbook.yaml:3:1: unknown key 'titel'; did you mean 'title'?",
+    "handbook.yaml:5:6: 'url' must be an absolute http:// or https:// address with no query, fragment or password, e.g. https://handbook.example.org",
+    "handbook.yaml:6:11: 'basePath' must start with \"/\", e.g. /handbook/",
+    "handbook.yaml:7:9: 'notice' must not be empty",
+  ]],
+  ['settings-misnamed', [
+    "handbook.yml: warning: is not read; handbook settings are read from 'handbook.yaml'; rename it to handbook.yaml",
+  ]],
   ['reciprocal-zero', [
     "liquid-a/data.csv:2:1: x = 0 has no reciprocal, but fit.transform.x is 'reciprocal'; leave the row out with fit.exclude, or choose another transform",
   ]],

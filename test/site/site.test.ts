@@ -1,12 +1,17 @@
 /**
- * The built site: `astro build` once into a temporary directory, then every demo correlation's page and downloads
- * are checked against the data, and (when Chromium is installed) the chart is drawn in a real browser.
+ * The built site: `astro build` once into a temporary directory, then every correlation's page and downloads are
+ * checked against the data, and (when Chromium is installed) the chart is drawn in a real browser.
+ *
+ * The build reads a copy of the project's content/ in a temporary folder, with one more correlation added (a test
+ * fixture) and a handbook settings file of its own (title, organisation, address, base path, notice): so adding a
+ * correlation to content/ keeps these checks green, and the settings are shown to reach the built site.
  *
  * Expected coefficients come from calling fitPolynomial on the same points and options here, independently of the
  * site, and must match the downloads to the last bit: JSON numbers and CSV fields are shortest round-trip text.
  */
 import { existsSync } from 'node:fs';
-import { readFile, readdir, rm } from 'node:fs/promises';
+import { cp, mkdir, mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTIONS, cautionsFor, fitPolynomial, type PolynomialFit } from '../../src/core/index.ts';
@@ -16,22 +21,53 @@ import { serveDirectory } from './staticServer.ts';
 
 const CHROMIUM = '/usr/bin/chromium';
 
+/** The settings file written into the copied content: every field set, none of them the default. */
+const SETTINGS = {
+  title: 'Thermal Fluids Handbook (test)',
+  organisation: 'Example Thermal Group',
+  url: 'https://handbook.example.org',
+  basePath: '/thermal/handbook/',
+  notice: 'Test notice: for the site test only.',
+};
+const SETTINGS_YAML = `# Written by test/site/site.test.ts\n${Object.entries(SETTINGS).map(([key, value]) => `${key}: "${value}"`).join('\n')}\n`;
+/** Folder name of the correlation the test adds to the copied content. */
+const ADDED = 'added-test-liquid';
+const BASE = SETTINGS.basePath;
+
+let workDir = '';
+let siteRoot = '';
 let outDir = '';
+let projectCount = 0;
 let correlations: LoadedCorrelation[] = [];
 
 beforeAll(async () => {
-  const handbook = await readHandbook(path.join(projectRoot, 'content'));
+  workDir = await mkdtemp(path.join(tmpdir(), 'correlary-site-'));
+  const content = path.join(workDir, 'content');
+  await cp(path.join(projectRoot, 'content'), content, { recursive: true });
+  projectCount = (await readHandbook(content)).datasets.length;
+  await cp(path.join(projectRoot, 'test/fixtures/content/valid/liquid-a'), path.join(content, ADDED), { recursive: true });
+  await writeFile(path.join(content, 'handbook.yaml'), SETTINGS_YAML);
+  const handbook = await readHandbook(content);
+  expect(handbook.diagnostics).toEqual([]);
   correlations = handbook.datasets.map((dataset) => dataset.correlation).filter((item): item is LoadedCorrelation => item !== undefined);
-  outDir = await buildSite();
-}, 120_000);
+  // Served from siteRoot, the site sits under the base path as it would on a static host.
+  siteRoot = path.join(workDir, 'site');
+  outDir = path.join(siteRoot, ...BASE.split('/').filter(Boolean));
+  await mkdir(outDir, { recursive: true });
+  await buildSite({ content, outDir });
+}, 180_000);
 
 afterAll(async () => {
-  if (outDir) await rm(outDir, { recursive: true, force: true });
+  if (workDir) await rm(workDir, { recursive: true, force: true });
 });
 
 /** Astro's text escaping, for looking up page text. */
 function escapeHtml(text: string): string {
   return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+}
+
+function escapeRegExp(text: string): string {
+  return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 }
 
 function unitSuffix(unit: string): string {
@@ -63,14 +99,37 @@ function page(slug: string): Promise<string> {
 }
 
 describe('astro build of the demo handbook', () => {
-  it('the demo handbook has correlations to check', () => {
-    expect(correlations.length).toBe(13);
+  it('the copied handbook has every correlation of content/ plus the added one', () => {
+    expect(projectCount).toBeGreaterThan(0);
+    expect(correlations.length).toBe(projectCount + 1);
+    expect(correlations.map((correlation) => correlation.slug)).toContain(ADDED);
+  });
+
+  it('the settings file sets the title, organisation, notice, address and base path of every page', async () => {
+    const pages = [path.join(outDir, 'index.html'), path.join(outDir, 'how-orders-are-chosen', 'index.html'), ...correlations.map((correlation) => path.join(outDir, 'correlations', correlation.slug, 'index.html'))];
+    for (const file of pages) {
+      const html = await readFile(file, 'utf8');
+      const relative = path.relative(outDir, path.dirname(file));
+      const own = relative === '' ? BASE : `${BASE}${relative.split(path.sep).join('/')}/`;
+      expect(html, file).toMatch(new RegExp(`<title>(.* · )?${escapeRegExp(escapeHtml(SETTINGS.title))}</title>`));
+      expect(html, file).toContain(`<a class="site-title" href="${BASE}">${escapeHtml(SETTINGS.title)}</a>`);
+      expect(html, file).toContain(escapeHtml(SETTINGS.organisation));
+      expect(html, file).toContain(escapeHtml(SETTINGS.notice));
+      expect(html, file).toContain(`<link rel="canonical" href="${SETTINGS.url}${own}">`);
+      expect(html, file).not.toContain('Correlary handbook');
+      // Every site-internal link and asset lives under the base path.
+      for (const [, href] of html.matchAll(/(?:href|src)="(\/[^"]*)"/g)) expect(href!.startsWith(BASE), `${file}: ${href}`).toBe(true);
+    }
+    const index = await readFile(path.join(outDir, 'index.html'), 'utf8');
+    expect(index).toContain(`<title>${escapeHtml(SETTINGS.title)}</title>`);
+    const added = correlations.find((correlation) => correlation.slug === ADDED)!;
+    expect(await page(ADDED)).toContain(`<title>${escapeHtml(added.meta.title)} · ${escapeHtml(SETTINGS.title)}</title>`);
   });
 
   it('index.html lists every correlation, links its page and badges invented data', async () => {
     const html = await readFile(path.join(outDir, 'index.html'), 'utf8');
     for (const correlation of correlations) {
-      expect(html, correlation.slug).toContain(`href="/correlations/${correlation.slug}/"`);
+      expect(html, correlation.slug).toContain(`href="${BASE}correlations/${correlation.slug}/"`);
       expect(html).toContain(escapeHtml(correlation.meta.title));
     }
     const invented = correlations.filter((correlation) => correlation.meta.invented).length;
@@ -82,7 +141,7 @@ describe('astro build of the demo handbook', () => {
     // The words come from the review status each correlation.yaml states (content/README.md, review.status).
     const words: Record<string, string> = { approved: 'Approved', draft: 'Draft · not approved', 'in-review': 'In review · not approved', withdrawn: 'Withdrawn · do not use' };
     const html = await readFile(path.join(outDir, 'index.html'), 'utf8');
-    const rows = [...html.matchAll(/<tr(?: class="([^"]*)")?>\s*<td><a href="\/correlations\/([^/]+)\/">(.*?)<\/tr>/gs)];
+    const rows = [...html.matchAll(new RegExp(`<tr(?: class="([^"]*)")?>\\s*<td><a href="${escapeRegExp(BASE)}correlations/([^/]+)/">(.*?)</tr>`, 'gs'))];
     expect(rows.length).toBe(correlations.length);
     for (const [, rowClass, slug, row] of rows) {
       const status = correlations.find((correlation) => correlation.slug === slug)!.meta.review.status;
@@ -252,7 +311,7 @@ describe('the browser only draws', () => {
 describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; install it with apt-get install -y chromium)`, () => {
   it('draws points, curve, bands and residuals from the embedded data, and shows a tooltip on hover', async () => {
     const { chromium } = await import('playwright-core');
-    const server = await serveDirectory(outDir);
+    const server = await serveDirectory(siteRoot);
     const browser = await chromium.launch({
       executablePath: CHROMIUM,
       headless: true,
@@ -267,7 +326,7 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
       browserPage.on('console', (message) => {
         if (message.type() === 'error') errors.push(message.text());
       });
-      await browserPage.goto(`${server.url}/correlations/${target.slug}/`, { waitUntil: 'networkidle' });
+      await browserPage.goto(`${server.url}${BASE}correlations/${target.slug}/`, { waitUntil: 'networkidle' });
       const svgs = browserPage.locator('[data-fit-chart] svg');
       await svgs.first().waitFor({ timeout: 10_000 });
       expect(await svgs.count()).toBe(2);
