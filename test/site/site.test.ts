@@ -183,7 +183,7 @@ describe('astro build of the demo handbook', () => {
         text = match![1]!;
       } else {
         expect(match, correlation.slug).toBeNull();
-        expect(html).toContain(`data-chart-href="/correlations/${correlation.slug}/chart-data.json"`);
+        expect(html).toContain(`data-chart-href="${BASE}correlations/${correlation.slug}/chart-data.json"`);
         text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'chart-data.json'), 'utf8');
       }
       const data = JSON.parse(text) as { curve: number[][]; points: number[][]; excluded: unknown[] };
@@ -198,7 +198,7 @@ describe('astro build of the demo handbook', () => {
       const long = (text.match(/\d+\.?\d*(?:e[-+]?\d+)?/g) ?? []).filter((token) => token.replace(/e.*$/, '').replace('.', '').replace(/^0+/, '').length >= 10);
       expect(long, `${correlation.slug}: long numbers`).toEqual([]);
       // The static picture for readers without scripts, from the shared renderer.
-      expect(html).toContain(`src="/correlations/${correlation.slug}/plot.svg"`);
+      expect(html).toContain(`src="${BASE}correlations/${correlation.slug}/plot.svg"`);
       const svg = await readFile(path.join(outDir, 'correlations', correlation.slug, 'plot.svg'), 'utf8');
       expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
       expect(svg.match(/h0/g)?.length ?? 0, `${correlation.slug}: a dot per point in both panels`).toBe(2 * correlation.used.length);
