@@ -227,7 +227,7 @@ describe('astro build of the demo handbook', () => {
     }
     // The big page lists its first 50 rows, and says where the rest are.
     const html = await page(big.slug);
-    expect(html).toContain(`href="/correlations/${big.slug}/data.csv"`);
+    expect(html).toContain(`href="${BASE}correlations/${big.slug}/data.csv"`);
     expect(html).toContain(`Rows 1–50 and every flagged row`);
   });
 
