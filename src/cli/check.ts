@@ -8,7 +8,8 @@ import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import type { PolynomialFit } from '../core/index.ts';
 import { CliError } from './cliError.ts';
 
-const USAGE = 'usage: correlary check [DIR]   (DIR defaults to content)';
+const USAGE = `usage: correlary check [DIR] [--strict]   (DIR defaults to content)
+  --strict   warnings fail the check too (exit 1), e.g. a lapsed or unbound approval`;
 
 /** Four significant digits, without a trailing exponent for ordinary magnitudes. */
 function short(value: number): string {
@@ -32,7 +33,9 @@ export async function runCheck(args: string[]): Promise<number> {
     console.log(USAGE);
     return 0;
   }
-  if (options.length > 0) throw new CliError(`check does not take option '${options[0]}'\n${USAGE}`, 2);
+  const strict = options.includes('--strict');
+  const unknown = options.filter((option) => option !== '--strict');
+  if (unknown.length > 0) throw new CliError(`check does not take option '${unknown[0]}'\n${USAGE}`, 2);
   if (positional.length > 1) throw new CliError(`check takes one directory, got ${positional.length}\n${USAGE}`, 2);
   const directory = positional[0] ?? 'content';
   const info = await stat(directory).catch(() => undefined);
@@ -60,5 +63,9 @@ export async function runCheck(args: string[]): Promise<number> {
   const warnings = sorted.length - errors;
   const count = handbook.datasets.length;
   console.log(`checked ${count} correlation${count === 1 ? '' : 's'} in ${directory}: ${errors} error${errors === 1 ? '' : 's'}, ${warnings} warning${warnings === 1 ? '' : 's'}`);
+  if (strict && errors === 0 && warnings > 0) {
+    console.log(`--strict: the ${warnings} warning${warnings === 1 ? '' : 's'} above fail${warnings === 1 ? 's' : ''} the check`);
+    return 1;
+  }
   return errors === 0 ? 0 : 1;
 }

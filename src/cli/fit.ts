@@ -207,6 +207,7 @@ async function csvCorrelation(file: string, values: FitArguments['values'], warn
     range: checked.range,
     warnings: [],
     orderPosition: { line: 0 },
+    reviewPosition: { line: 0 },
   };
 }
 

@@ -31,6 +31,8 @@ export function coefficientsCsv(record: CorrelationRecord): string {
   for (const caution of record.cautions) lines.push(comment(`CAUTION: ${caution}`));
   lines.push(comment(`Title: ${record.title}`));
   lines.push(comment(`Status: ${record.status}`));
+  if (record.approval !== null) lines.push(comment(`Approval: ${record.approval.label}; holds: ${record.approval.holds ? 'yes' : 'no'}`));
+  if (record.fingerprint !== null) lines.push(comment(`Fingerprint: ${record.fingerprint}`));
   lines.push(comment(`Property: ${record.property.name}, y = ${record.symbols.y} [${yUnit}]`));
   lines.push(comment(`Variable: ${record.variable.name}, x = ${record.symbols.x} [${xUnit}]`));
   lines.push(comment(`Validity range: ${record.range.min} to ${record.range.max} ${xUnit}`));

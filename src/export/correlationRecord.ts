@@ -8,6 +8,11 @@
  *   recordVersion        1
  *   slug, title          identity of the correlation
  *   status               review status: draft | in-review | approved | withdrawn
+ *   fingerprint          fingerprint of the data, options and result (content/README.md, "Fingerprint recipe"), or
+ *                        null when the record does not come from a handbook folder (correlary fit)
+ *   approval             {state, holds, label, lapseReasons, reviewer, date, fingerprint, replacedBy} or null:
+ *                        state holds | lapsed | unbound | withdrawn | none; holds is true only when the recorded
+ *                        fingerprint equals the current one; fingerprint here is the one approved
  *   invented, notice     invented demonstration data, and the notice that says so (null otherwise)
  *   cautions             the cautions, the first naming the validity range
  *   property, variable   {name, symbol (TeX), unit} of y and x
@@ -51,7 +56,8 @@ import {
   type OrderSelection,
   type PolynomialFit,
 } from '../core/index.ts';
-import type { CorrelationMeta, ExcludedPoint } from '../schema/index.ts';
+import type { CorrelationMeta, ExcludedPoint, StoredReviewTrail } from '../schema/index.ts';
+import { approvalLabel } from './approvalLabel.ts';
 import { INVENTED_NOTICE } from './inventedNotice.ts';
 import { jsonNumbers, type Jsonified } from './jsonNumbers.ts';
 
@@ -63,6 +69,8 @@ export interface CorrelationSource {
   readonly excluded: readonly ExcludedPoint[];
   readonly fit: PolynomialFit;
   readonly selection: OrderSelection | null;
+  /** Fingerprint and approval state, for a correlation of a handbook. */
+  readonly reviewTrail?: StoredReviewTrail | undefined;
 }
 
 /** Version of the record's layout; raised only when a field changes meaning. */
@@ -79,6 +87,20 @@ export function correlationRecord(source: CorrelationSource) {
     slug: source.slug,
     title: meta.title,
     status: meta.review.status,
+    fingerprint: source.reviewTrail?.fingerprint ?? null,
+    approval:
+      source.reviewTrail === undefined
+        ? null
+        : {
+            state: source.reviewTrail.approval,
+            holds: source.reviewTrail.approval === 'holds',
+            label: approvalLabel(meta.review, source.reviewTrail),
+            lapseReasons: source.reviewTrail.lapseReasons,
+            reviewer: meta.review.reviewer ?? null,
+            date: meta.review.date ?? null,
+            fingerprint: meta.review.fingerprint ?? null,
+            replacedBy: meta.review.replacedBy ?? null,
+          },
     invented: meta.invented,
     notice: meta.invented ? INVENTED_NOTICE : null,
     cautions: cautionsFor(source.range, xUnit, meta.variable.name),

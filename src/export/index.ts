@@ -6,3 +6,4 @@ export { correlationRecord, RECORD_VERSION, type CorrelationRecord, type Correla
 export { coefficientsCsv } from './coefficientsCsv.ts';
 export { INVENTED_NOTICE } from './inventedNotice.ts';
 export { finiteOrNull, jsonNumbers, type Jsonified, type JsonValue } from './jsonNumbers.ts';
+export { approvalLabel, lapseReasonsText } from './approvalLabel.ts';

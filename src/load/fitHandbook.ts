@@ -7,11 +7,14 @@ import { fitDataset, type DatasetFit } from './fitDataset.ts';
 import { readHandbook } from './readHandbook.ts';
 import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
 import type { DatasetResult } from './types.ts';
+import { reviewDiagnostics, reviewTrail, type ReviewTrail } from './review/reviewTrail.ts';
 
 export interface FittedDataset {
   readonly dataset: DatasetResult;
   /** The fit, when the folder was read without errors (the fit itself may still have failed). */
   readonly fitted: DatasetFit | undefined;
+  /** Fingerprint and approval state, when the folder was read without errors. */
+  readonly review: ReviewTrail | undefined;
 }
 
 export interface FittedHandbook {
@@ -29,6 +32,7 @@ export async function fitHandbook(directory: string): Promise<FittedHandbook> {
   const readingMs = performance.now() - started;
   const diagnostics: Diagnostic[] = [...handbook.diagnostics];
   const datasets: FittedDataset[] = [];
+  const slugs = new Set(handbook.datasets.map((read) => read.slug));
   for (const read of handbook.datasets) {
     diagnostics.push(...read.diagnostics);
     // Errors about the folder as a whole (an invalid or duplicate slug) belong to it too: such a folder is not fitted.
@@ -38,7 +42,9 @@ export async function fitHandbook(directory: string): Promise<FittedHandbook> {
     const dataset = folderErrors.length ? { ...read, diagnostics: [...read.diagnostics, ...folderErrors] } : read;
     const fitted = dataset.correlation === undefined || folderErrors.length ? undefined : fitDataset(dataset.correlation);
     if (fitted) diagnostics.push(...fitted.diagnostics);
-    datasets.push({ dataset, fitted });
+    const review = fitted === undefined || dataset.correlation === undefined ? undefined : reviewTrail(dataset.correlation, fitted.fit);
+    if (review !== undefined && dataset.correlation !== undefined) diagnostics.push(...reviewDiagnostics(dataset.correlation, review, slugs));
+    datasets.push({ dataset, fitted, review });
   }
   const fittingMs = performance.now() - started - readingMs;
   return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs } };

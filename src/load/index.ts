@@ -13,6 +13,11 @@ export type { DatasetResult, LoadedCorrelation } from './types.ts';
 export { fitDataset, type DatasetFit } from './fitDataset.ts';
 export { fitHandbook, type FittedDataset, type FittedHandbook } from './fitHandbook.ts';
 
+// review trail: fingerprint, approval state
+export { fingerprint, canonicalTexts, parseFingerprint, FINGERPRINT_RECIPE, type Fingerprint, type FingerprintComponent } from './review/fingerprint.ts';
+export { approvalState, lapseText, LAPSE_REASON_TEXT, type Approval, type LapseReason } from './review/approvalState.ts';
+export { reviewTrail, reviewDiagnostics, type ReviewTrail } from './review/reviewTrail.ts';
+
 // messages
 export { formatDiagnostic, sortDiagnostics, hasErrors, error, warning, type Diagnostic, type Position } from './diagnostic.ts';
 

@@ -131,5 +131,6 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
     range: checked.range,
     warnings: sorted.filter((diagnostic) => diagnostic.severity === 'warning'),
     orderPosition: metadata.valueAt(['fit', 'order']),
+    reviewPosition: metadata.valueAt(['review', 'fingerprint']),
   });
 }

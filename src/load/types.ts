@@ -25,6 +25,8 @@ export interface LoadedCorrelation {
   readonly warnings: readonly Diagnostic[];
   /** Where fit.order (or the fit block, or the file start) sits in the metadata, for fit messages. */
   readonly orderPosition: Position;
+  /** Where review.fingerprint (or the review block, or the file start) sits in the metadata, for review messages. */
+  readonly reviewPosition: Position;
 }
 
 /** Outcome of reading one folder: the correlation when there were no errors, and every message found. */

@@ -25,9 +25,9 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   const displayDirectory = path.relative(process.cwd(), absoluteDirectory) || '.';
   const handbook = await fitHandbook(displayDirectory);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
-  for (const { dataset, fitted } of handbook.datasets) {
+  for (const { dataset, fitted, review } of handbook.datasets) {
     const correlation = dataset.correlation;
-    if (correlation === undefined || fitted === undefined) continue;
+    if (correlation === undefined || fitted === undefined || review === undefined) continue;
     const entry: CorrelationEntry = {
       slug: correlation.slug,
       meta: correlation.meta,
@@ -38,6 +38,11 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
       warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
       fit: (fitted.fit as unknown as Record<string, unknown> | undefined) ?? null,
       orderSelection: (fitted.selection as unknown as Record<string, unknown> | undefined) ?? null,
+      reviewTrail: {
+        fingerprint: review.fingerprint?.text ?? null,
+        approval: review.approval.state,
+        lapseReasons: review.approval.state === 'lapsed' ? [...review.approval.reasons] : [],
+      },
     };
     entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(correlation.metadataPath)) });
   }

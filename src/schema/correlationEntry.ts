@@ -57,6 +57,18 @@ const intervalSchema = z
   })
   .strict();
 
+/** The review trail as stored: fingerprint and whether the approval holds (src/load/review/). */
+export const reviewTrailSchema = z
+  .object({
+    /** Current fingerprint (`fp1-…`), or null when the correlation could not be fitted. */
+    fingerprint: z.string().nullable().describe('Current fingerprint, or null without a fit'),
+    /** `holds`, `lapsed`, `unbound` (approved without a fingerprint), `withdrawn` or `none` (draft, in review). */
+    approval: z.enum(['holds', 'lapsed', 'unbound', 'withdrawn', 'none']).describe('Whether the approval holds'),
+    /** Why a lapsed approval lapsed: `data`, `options`, `result`, `recipe` or `fit`; empty otherwise. */
+    lapseReasons: z.array(z.enum(['data', 'options', 'result', 'recipe', 'fit'])).describe('Why the approval lapsed'),
+  })
+  .strict();
+
 /** The stored entry. */
 export const correlationEntrySchema = z
   .object({
@@ -78,10 +90,13 @@ export const correlationEntrySchema = z
     fit: z.record(z.unknown()).nullable().describe('PolynomialFit from the core, as plain data'),
     /** Order-selection summary when the order was chosen automatically, else null. */
     orderSelection: z.record(z.unknown()).nullable().describe('Order-selection result, as plain data'),
+    /** Fingerprint and approval state. */
+    reviewTrail: reviewTrailSchema.describe('Fingerprint and approval state'),
   })
   .strict();
 
 export type DataPoint = z.output<typeof dataPointSchema>;
 export type ExcludedPoint = z.output<typeof excludedPointSchema>;
 export type Diagnostic = z.output<typeof diagnosticSchema>;
+export type StoredReviewTrail = z.output<typeof reviewTrailSchema>;
 export type CorrelationEntry = z.output<typeof correlationEntrySchema>;

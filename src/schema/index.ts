@@ -24,7 +24,7 @@ export { materialSchema } from './material.ts';
 export type { Material } from './material.ts';
 export { sourceSchema, sourceMethodSchema, isoDateSchema } from './source.ts';
 export type { Source } from './source.ts';
-export { reviewSchema, reviewStatusSchema } from './review.ts';
+export { reviewSchema, reviewStatusSchema, FINGERPRINT_PATTERN } from './review.ts';
 export type { Review } from './review.ts';
 export { dataColumnsSchema } from './dataColumns.ts';
 export type { DataColumns } from './dataColumns.ts';
@@ -46,5 +46,6 @@ export {
   dataPointSchema,
   excludedPointSchema,
   diagnosticSchema,
+  reviewTrailSchema,
 } from './correlationEntry.ts';
-export type { CorrelationEntry, DataPoint, ExcludedPoint, Diagnostic } from './correlationEntry.ts';
+export type { StoredReviewTrail, CorrelationEntry, DataPoint, ExcludedPoint, Diagnostic } from './correlationEntry.ts';

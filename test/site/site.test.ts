@@ -15,7 +15,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTIONS, cautionsFor, fitPolynomial, type PolynomialFit } from '../../src/core/index.ts';
-import { fitDataset, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
+import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
 import { serveDirectory } from './staticServer.ts';
 
@@ -138,22 +138,33 @@ describe('astro build of the demo handbook', () => {
   });
 
   it('index.html and every page show the review status as a worded badge; unapproved rows are set apart', async () => {
-    // The words come from the review status each correlation.yaml states (content/README.md, review.status).
+    // The words come from the review status each correlation.yaml states (content/README.md, review.status) and,
+    // for an approved one, from whether 'correlary check' (fitHandbook) finds its approval holding.
     const words: Record<string, string> = { approved: 'Approved', draft: 'Draft · not approved', 'in-review': 'In review · not approved', withdrawn: 'Withdrawn · do not use' };
+    const checked = await fitHandbook(path.join(projectRoot, 'content'));
+    const approvalOf = (slug: string) => checked.datasets.find((dataset) => dataset.dataset.slug === slug)!.review!.approval.state;
+    const expected = (correlation: LoadedCorrelation): RegExp => {
+      const review = correlation.meta.review;
+      const state = approvalOf(correlation.slug);
+      if (state === 'unbound') return /<\/span> Unbound approval · not approved<\/span>/;
+      if (state === 'lapsed') return /<\/span> Approval lapsed \([a-z, ]+\) · not approved<\/span>/;
+      if (review.status === 'withdrawn' && review.replacedBy) return new RegExp(`</span> Withdrawn · do not use · replaced by ${review.replacedBy}</span>`);
+      return new RegExp(`</span> ${words[review.status]}</span>`);
+    };
     const html = await readFile(path.join(outDir, 'index.html'), 'utf8');
     const rows = [...html.matchAll(new RegExp(`<tr(?: class="([^"]*)")?>\\s*<td><a href="${escapeRegExp(BASE)}correlations/([^/]+)/">(.*?)</tr>`, 'gs'))];
     expect(rows.length).toBe(correlations.length);
     for (const [, rowClass, slug, row] of rows) {
-      const status = correlations.find((correlation) => correlation.slug === slug)!.meta.review.status;
-      expect(row, slug).toContain(`data-status="${status}"`);
-      expect(row, slug).toMatch(new RegExp(`</span> ${words[status]}</span>`));
-      expect((rowClass ?? '').includes('not-approved'), `${slug} row set apart`).toBe(status !== 'approved');
+      const correlation = correlations.find((item) => item.slug === slug)!;
+      expect(row, slug).toContain(`data-status="${correlation.meta.review.status}"`);
+      expect(row, slug).toMatch(expected(correlation));
+      expect((rowClass ?? '').includes('not-approved'), `${slug} row set apart`).toBe(approvalOf(slug!) !== 'holds');
     }
     for (const correlation of correlations) {
       const text = await page(correlation.slug);
       const status = correlation.meta.review.status;
       expect(text.match(new RegExp(`data-status="${status}"`, 'g'))?.length, `${correlation.slug}: lede and provenance`).toBe(2);
-      expect(text, correlation.slug).toContain(`</span> ${words[status]}</span>`);
+      expect(text, correlation.slug).toMatch(expected(correlation));
     }
   });
 

@@ -9,5 +9,5 @@ import { fitOf, selectionOf, type CorrelationEntry } from './entryView.ts';
 export function entryRecord(entry: CorrelationEntry): CorrelationRecord {
   const fit = fitOf(entry);
   if (fit === null) throw new Error(`entryRecord requires a fit; ${entry.slug} has none`);
-  return correlationRecord({ slug: entry.slug, meta: entry.meta, range: entry.range, excluded: entry.excluded, fit, selection: selectionOf(entry) });
+  return correlationRecord({ slug: entry.slug, meta: entry.meta, range: entry.range, excluded: entry.excluded, fit, selection: selectionOf(entry), reviewTrail: entry.reviewTrail });
 }

@@ -3,6 +3,13 @@
  * Kept apart from the Astro component so lists that build rows in code (and tests) use the same words.
  */
 import { REVIEW_LABELS } from './entryView.ts';
+import { lapseReasonsText } from './reviewView.ts';
+
+/** The part of an entry's review trail a badge needs (src/schema/correlationEntry.ts, reviewTrail). */
+export interface BadgeApproval {
+  readonly approval: string;
+  readonly lapseReasons?: readonly string[];
+}
 
 /** The parts of one status badge. */
 export interface StatusBadgeView {
@@ -28,9 +35,20 @@ const TITLES: Record<string, string> = {
 /**
  * The badge for a review status, with an optional extra label.
  * @example statusBadgeView('draft').text // => "Draft · not approved"
- * @example statusBadgeView('approved', 'approval lapsed').text // => "Approved · approval lapsed"
+ * @example statusBadgeView('approved', undefined, { approval: 'unbound' }).text // => "Unbound approval · not approved"
  */
-export function statusBadgeView(status: string, extra?: string): StatusBadgeView {
+export function statusBadgeView(status: string, extra?: string, approval?: BadgeApproval, replacedBy?: string): StatusBadgeView {
+  if (status === 'approved' && approval !== undefined && approval.approval !== 'holds') {
+    const lapsed = approval.approval === 'lapsed';
+    const reasons = lapseReasonsText(approval.lapseReasons ?? []);
+    const label = lapsed ? `Approval lapsed${reasons ? ` (${reasons})` : ''}` : 'Unbound approval';
+    const title = lapsed
+      ? `Approved for a different fingerprint (${reasons || 'changed'}): what is published is not what was approved`
+      : 'Marked approved, but no fingerprint records what was approved: not a valid approval';
+    const parts = [label, 'not approved', extra?.trim() ?? ''].filter((part) => part !== '');
+    return { kind: 'unapproved', slug: lapsed ? 'approval-lapsed' : 'unbound-approval', text: parts.join(' · '), mark: '!', title };
+  }
+  if (status === 'withdrawn' && replacedBy !== undefined) extra = [`replaced by ${replacedBy}`, extra?.trim() ?? ''].filter(Boolean).join(' · ');
   const label = REVIEW_LABELS[status] ?? status.replace(/[-_]+/g, ' ').replace(/^./, (first) => first.toUpperCase());
   const slug = status.toLowerCase().replace(/[^a-z0-9]+/g, '-');
   const kind = status === 'approved' ? 'approved' : status === 'withdrawn' ? 'withdrawn' : 'unapproved';
