@@ -141,7 +141,7 @@ describe('astro build of the demo handbook', () => {
     // The words come from the review status each correlation.yaml states (content/README.md, review.status) and,
     // for an approved one, from whether 'correlary check' (fitHandbook) finds its approval holding.
     const words: Record<string, string> = { approved: 'Approved', draft: 'Draft · not approved', 'in-review': 'In review · not approved', withdrawn: 'Withdrawn · do not use' };
-    const checked = await fitHandbook(path.join(projectRoot, 'content'));
+    const checked = await fitHandbook(path.join(workDir, 'content'));
     const approvalOf = (slug: string) => checked.datasets.find((dataset) => dataset.dataset.slug === slug)!.review!.approval.state;
     const expected = (correlation: LoadedCorrelation): RegExp => {
       const review = correlation.meta.review;
