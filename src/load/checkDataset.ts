@@ -1,15 +1,25 @@
 /**
  * Checks that need both files: exclusions, point counts, transforms, repeated x, validity range and
  * pass-through points. Every message points at the line to change.
+ *
+ * They also run when the files have other errors, on what is valid (the fit block's valid fields, the data rows
+ * whose cells are valid), so one run reports every problem. Checks whose verdict could change with a row that could
+ * not be read (point counts, the fixed order, exclusions by x, the validity range) then wait for a complete table.
  */
 import { fixedOrderProblem } from '../core/index.ts';
-import type { CorrelationMeta, DataPoint, ExcludedPoint } from '../schema/index.ts';
+import type { DataColumns, DataPoint, ExcludedPoint, FitSettings } from '../schema/index.ts';
 import { error, warning, type Diagnostic, type Position } from './diagnostic.ts';
 import { MINIMUM_POINTS } from './limits.ts';
 
 export interface DatasetCheckInput {
-  readonly meta: CorrelationMeta;
+  /** The fit and data blocks (of valid metadata, or as far as they are valid). */
+  readonly meta: { readonly fit: FitSettings; readonly data: DataColumns };
+  /** The points: every data row, or (with `complete: false`) the rows that could be read. */
   readonly points: readonly DataPoint[];
+  /** False when some data rows could not be read and are missing from `points`. Defaults to true. */
+  readonly complete?: boolean;
+  /** Number of data rows in the file, readable or not. Defaults to the number of points. */
+  readonly rowCount?: number;
   readonly dataPath: string;
   readonly metadataPath: string;
   readonly headerLine: number;
@@ -32,13 +42,15 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
   const { meta, points, dataPath, metadataPath, valueAt } = input;
   const fit = meta.fit;
   const diagnostics: Diagnostic[] = [];
+  const complete = input.complete ?? true;
+  const rowCount = input.rowCount ?? points.length;
 
   // Exclusions: by data row or by exact x; each must match something.
   const reasons = new Map<number, string>();
   fit.exclude.forEach((exclusion, index) => {
     if (exclusion.row !== undefined) {
-      if (exclusion.row > points.length) {
-        diagnostics.push(error(metadataPath, valueAt(['fit', 'exclude', index, 'row']), `fit.exclude[${index}].row is ${exclusion.row} but the data file has ${points.length} rows`));
+      if (exclusion.row > rowCount) {
+        diagnostics.push(error(metadataPath, valueAt(['fit', 'exclude', index, 'row']), `fit.exclude[${index}].row is ${exclusion.row} but the data file has ${rowCount} rows`));
         return;
       }
       if (reasons.has(exclusion.row)) {
@@ -47,7 +59,7 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
       reasons.set(exclusion.row, exclusion.reason);
     } else {
       const matches = points.filter((point) => point.x === exclusion.x);
-      if (matches.length === 0) {
+      if (matches.length === 0 && complete) {
         diagnostics.push(error(metadataPath, valueAt(['fit', 'exclude', index, 'x']), `no data row has x = ${exclusion.x}`, 'x must equal the value in the data file exactly; or exclude by row'));
       }
       for (const point of matches) reasons.set(point.row, exclusion.reason);
@@ -60,7 +72,9 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
 
   // Enough points, and more than one x.
   const distinctX = new Set(used.map((point) => point.x)).size;
-  if (used.length < MINIMUM_POINTS) {
+  if (!complete) {
+    // Counts wait for a table whose every row could be read.
+  } else if (used.length < MINIMUM_POINTS) {
     diagnostics.push(
       error(dataPath, { line: input.headerLine }, `only ${used.length} ${used.length === 1 ? 'point is' : 'points are'} left to fit; a correlation needs at least ${MINIMUM_POINTS}`),
     );
@@ -69,7 +83,7 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
   }
 
   // A fixed order: the core's one rule (fixedOrderProblem), at the order's line.
-  if (typeof fit.order === 'number' && used.length >= MINIMUM_POINTS) {
+  if (typeof fit.order === 'number' && used.length >= MINIMUM_POINTS && complete) {
     const problem = fixedOrderProblem({ order: fit.order, intercept: fit.intercept, constraints: fit.passThrough.length, n: used.length, distinct: distinctX });
     if (problem !== null) diagnostics.push(error(metadataPath, valueAt(['fit', 'order']), problem));
   }
@@ -108,7 +122,7 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
   const xs = used.map((point) => point.x);
   const dataRange = { min: Math.min(...xs), max: Math.max(...xs) };
   const range = { min: fit.range?.min ?? dataRange.min, max: fit.range?.max ?? dataRange.max };
-  if (used.length > 0) {
+  if (used.length > 0 && complete) {
     if (fit.range?.min !== undefined && (fit.range.min < dataRange.min || fit.range.min >= dataRange.max)) {
       diagnostics.push(error(metadataPath, valueAt(['fit', 'range', 'min']), `fit.range.min ${fit.range.min} is outside the x range of the data (${dataRange.min} to ${dataRange.max})`, 'the validity range can be narrowed, never widened'));
     }

@@ -101,14 +101,19 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
   const converted = tableToPoints(table, metadata.dataColumns, dataPath);
   diagnostics.push(...converted.diagnostics);
   const meta = metadata.meta;
-  if (meta === undefined || converted.points === undefined) return done(slug);
+  // The data are checked against the fit block even when either file has other errors (on what is valid), so
+  // that one run reports every problem; such a folder is not fitted.
+  const checkable = meta ?? (metadata.dataColumns && metadata.partialFit ? { data: metadata.dataColumns, fit: metadata.partialFit } : undefined);
+  if (checkable === undefined) return done(slug);
 
   // Checks across both files.
-  const roleIndex = { x: table.header.findIndex((cell) => cell.text === meta.data.x), y: table.header.findIndex((cell) => cell.text === meta.data.y) };
+  const roleIndex = { x: table.header.findIndex((cell) => cell.text === checkable.data.x), y: table.header.findIndex((cell) => cell.text === checkable.data.y) };
   const rowsByLine = new Map(table.rows.map((row) => [row.line, row]));
   const checked = checkDataset({
-    meta,
-    points: converted.points,
+    meta: checkable,
+    points: converted.points ?? converted.validPoints,
+    complete: converted.points !== undefined,
+    rowCount: converted.rowCount,
     dataPath,
     metadataPath,
     headerLine: table.headerLine,
@@ -116,7 +121,7 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
     cellColumn: (line, role) => rowsByLine.get(line)?.cells[roleIndex[role]]?.column,
   });
   diagnostics.push(...checked.diagnostics);
-  if (hasErrors(diagnostics)) return done(slug);
+  if (meta === undefined || converted.points === undefined || hasErrors(diagnostics)) return done(slug);
   const sorted = sortDiagnostics(diagnostics);
   return done(slug, {
     slug,

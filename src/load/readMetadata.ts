@@ -2,10 +2,19 @@
  * Parse and validate a correlation's metadata file, reporting every problem with its line and column.
  */
 import { LineCounter, parseDocument, type Document } from 'yaml';
-import { correlationMetaSchema, dataColumnsSchema, type CorrelationMeta, type DataColumns } from '../schema/index.ts';
+import {
+  correlationMetaSchema,
+  dataColumnsSchema,
+  fitOptionRules,
+  metaRules,
+  type CorrelationMeta,
+  type DataColumns,
+  type FitSettings,
+} from '../schema/index.ts';
+import { lenientFitSettings } from './lenientFitSettings.ts';
 import { error, warning, type Diagnostic, type Position } from './diagnostic.ts';
 import { keyPosition, valuePosition } from './yamlPositions.ts';
-import { issueToProblems } from './zodMessages.ts';
+import { issueToProblems, keyName } from './zodMessages.ts';
 
 /** Result of reading the metadata text: what could be validated, plus positions for later messages. */
 export interface MetadataResult {
@@ -13,6 +22,11 @@ export interface MetadataResult {
   readonly meta: CorrelationMeta | undefined;
   /** The data block alone, when it validates even though other keys do not (so the CSV can still be checked). */
   readonly dataColumns: DataColumns | undefined;
+  /**
+   * The fit block as far as it is valid (lenientFitSettings), when the metadata has errors: the data are still
+   * checked against it, so that one run reports every problem. Undefined when the metadata is valid (use meta.fit).
+   */
+  readonly partialFit: FitSettings | undefined;
   readonly diagnostics: Diagnostic[];
   /** Position of a value (or, when absent, its nearest ancestor key) in the metadata file. */
   readonly valueAt: (path: readonly (string | number)[]) => Position;
@@ -45,7 +59,7 @@ export function readMetadata(text: string, displayPath: string): MetadataResult 
     }
     diagnostics.push(make(displayPath, { line, column: col }, `YAML ${isError ? 'syntax error' : 'warning'}: ${message}`));
   }
-  if (document.errors.length > 0) return { meta: undefined, dataColumns: undefined, diagnostics, valueAt };
+  if (document.errors.length > 0) return { meta: undefined, dataColumns: undefined, partialFit: undefined, diagnostics, valueAt };
 
   // Template placeholders must not reach a published page: the first one is an error, the count says how many.
   const placeholderLines = text
@@ -64,13 +78,30 @@ export function readMetadata(text: string, displayPath: string): MetadataResult 
     diagnostics.push(
       error(displayPath, { line: 1, column: 1 }, 'metadata must be a block of keys such as title, property, variable', "run 'correlary new <slug>' for a commented template"),
     );
-    return { meta: undefined, dataColumns: undefined, diagnostics, valueAt };
+    return { meta: undefined, dataColumns: undefined, partialFit: undefined, diagnostics, valueAt };
   }
 
   const parsed = correlationMetaSchema.safeParse(raw);
-  if (parsed.success) return { meta: parsed.data, dataColumns: parsed.data.data, diagnostics, valueAt };
+  if (parsed.success) return { meta: parsed.data, dataColumns: parsed.data.data, partialFit: undefined, diagnostics, valueAt };
 
   const problems = parsed.error.issues.flatMap((issue) => issueToProblems(correlationMetaSchema, issue));
+  // zod skips a block's rules across fields when one of its fields is wrong: run them on the valid fields, so a
+  // fixed order without a reason is reported in the same run as a misspelt key (each problem once).
+  const rawFit = (raw as Record<string, unknown>)['fit'];
+  const partialFit = lenientFitSettings(rawFit);
+  const dataBlock = dataColumnsSchema.safeParse((raw as Record<string, unknown>)['data']);
+  const ruleProblems = [
+    ...fitOptionRules(partialFit).map((problem) => ({ ...problem, path: ['fit', ...problem.path] })),
+    ...(dataBlock.success ? metaRules({ fit: partialFit, data: dataBlock.data }) : []),
+  ];
+  const reported = new Set(problems.map((problem) => `${keyName(problem.path)}|${problem.message}`));
+  for (const rule of ruleProblems) {
+    const message = `'${keyName(rule.path)}' ${rule.message}`;
+    const key = `${keyName(rule.path)}|${message}`;
+    if (reported.has(key)) continue;
+    reported.add(key);
+    problems.push({ path: rule.path, atKey: false, message });
+  }
   // A misspelt required key gives "unknown key 'nam'" and "missing required key 'name'": keep only the first.
   const typoTargets = new Set(problems.filter((problem) => problem.typoOf !== undefined).map((problem) => problem.typoOf));
   for (const problem of problems) {
@@ -78,6 +109,5 @@ export function readMetadata(text: string, displayPath: string): MetadataResult 
     const position = problem.atKey ? keyPosition(document, lineCounter, problem.path) : valueAt(problem.path);
     diagnostics.push(error(displayPath, position, problem.message, problem.hint));
   }
-  const dataBlock = dataColumnsSchema.safeParse((raw as Record<string, unknown>)['data']);
-  return { meta: undefined, dataColumns: dataBlock.success ? dataBlock.data : undefined, diagnostics, valueAt };
+  return { meta: undefined, dataColumns: dataBlock.success ? dataBlock.data : undefined, partialFit, diagnostics, valueAt };
 }

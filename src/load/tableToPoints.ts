@@ -14,6 +14,14 @@ const DECIMAL_COMMA_PATTERN = /^[+-]?\d+,\d+([eE][+-]?\d+)?$/;
 export interface PointsResult {
   /** Points, when every cell of the declared columns is valid. */
   readonly points: DataPoint[] | undefined;
+  /**
+   * The rows whose declared cells are valid, even when other rows are not (empty when the x or y column is not
+   * known): checks that hold row by row (transforms, exclusions by row) still run on them, so one run reports
+   * every problem.
+   */
+  readonly validPoints: DataPoint[];
+  /** Number of data rows in the file (valid or not), for exclusions by row number. */
+  readonly rowCount: number;
   readonly diagnostics: Diagnostic[];
 }
 
@@ -55,7 +63,7 @@ export function tableToPoints(
   if (table.header.every((cell) => NUMBER_PATTERN.test(cell.text))) {
     const example = columns === undefined ? 'T,cp' : [columns.x, columns.y].join(',');
     diagnostics.push(error(file, { line: table.headerLine, column: 1 }, 'no header row: the first row holds numbers', `add a first line naming the columns, e.g. ${example}`));
-    return { points: undefined, diagnostics };
+    return { points: undefined, validPoints: [], rowCount: table.rows.length, diagnostics };
   }
   const seen = new Map<string, CsvCell>();
   table.header.forEach((cell) => {
@@ -134,7 +142,7 @@ export function tableToPoints(
       }
       values[role] = value;
     });
-    if (rowValid && columns !== undefined) {
+    if (rowValid && columns !== undefined && values.x !== undefined && values.y !== undefined) {
       const point: DataPoint = { row: row.row, line: row.line, x: values.x as number, y: values.y as number };
       if (typeof values.uncertainty === 'number') point.uncertainty = values.uncertainty;
       if (typeof values.note === 'string') point.note = values.note;
@@ -142,5 +150,5 @@ export function tableToPoints(
     }
   }
   const complete = columns !== undefined && !diagnostics.some((diagnostic) => diagnostic.severity === 'error');
-  return { points: complete ? points : undefined, diagnostics };
+  return { points: complete ? points : undefined, validPoints: points, rowCount: table.rows.length, diagnostics };
 }

@@ -60,14 +60,20 @@ export const correlationMetaSchema = z
   })
   .strict()
   .superRefine((meta, context) => {
-    if (meta.fit.weights === 'uncertainty' && meta.data.uncertainty === undefined) {
-      context.addIssue({
-        code: z.ZodIssueCode.custom,
-        path: ['fit', 'weights'],
-        message: "is 'uncertainty' but data.uncertainty names no column",
-      });
-    }
+    for (const problem of metaRules(meta)) context.addIssue({ code: z.ZodIssueCode.custom, path: problem.path, message: problem.message });
   });
+
+/**
+ * The rule across the `fit` and `data` blocks: weights from uncertainty need an uncertainty column. Kept apart from
+ * the schema so it can run when another key of the file is wrong (zod then skips the file's refinement).
+ * @example metaRules({ fit: { weights: 'uncertainty' }, data: {} }) // => [{ path: ['fit', 'weights'], message: "is 'uncertainty' but data.uncertainty names no column" }]
+ */
+export function metaRules(meta: { readonly fit: { readonly weights?: string | undefined }; readonly data: { readonly uncertainty?: string | undefined } }): { path: (string | number)[]; message: string }[] {
+  if (meta.fit.weights === 'uncertainty' && meta.data.uncertainty === undefined) {
+    return [{ path: ['fit', 'weights'], message: "is 'uncertainty' but data.uncertainty names no column" }];
+  }
+  return [];
+}
 
 export type CorrelationMetaInput = z.input<typeof correlationMetaSchema>;
 export type CorrelationMeta = z.output<typeof correlationMetaSchema>;

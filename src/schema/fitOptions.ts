@@ -78,8 +78,11 @@ export const transformSchema = z
   })
   .strict();
 
-/** The `fit` block. Every field has a default, so the block itself may be left out. */
-export const fitOptionsSchema = z
+/**
+ * The fields of the `fit` block, each checked on its own (no rule across fields yet). Exported so a loader can
+ * read the fields that are valid when others are not, and still check the data against them.
+ */
+export const fitOptionsFieldsSchema = z
   .object({
     /**
      * `auto` (default) chooses the order with `criterion` up to `maxOrder`; a whole number fixes the order and then
@@ -113,25 +116,47 @@ export const fitOptionsSchema = z
     /** Narrowed validity range. Defaults to the x range of the points used. */
     range: rangeSchema.optional().describe('Narrowed validity range'),
   })
-  .strict()
-  .superRefine((fit, context) => {
-    if (typeof fit.order === 'number' && fit.reason === undefined) {
-      context.addIssue({
-        code: z.ZodIssueCode.custom,
-        path: ['order'],
-        message: "is a fixed order but 'fit.reason' does not say why",
-      });
-    }
-    if (fit.criterion === 'chiSquare' && fit.weights !== 'uncertainty') {
-      context.addIssue({ code: z.ZodIssueCode.custom, path: ['criterion'], message: "is 'chiSquare', which needs weights: uncertainty" });
-    }
-    if (typeof fit.order === 'number' && fit.criterion !== undefined) {
-      context.addIssue({ code: z.ZodIssueCode.custom, path: ['criterion'], message: 'has no effect when the order is fixed' });
-    }
-    if (fit.range?.min !== undefined && fit.range.max !== undefined && !(fit.range.min < fit.range.max)) {
-      context.addIssue({ code: z.ZodIssueCode.custom, path: ['range', 'max'], message: 'must be greater than range.min' });
-    }
-  });
+  .strict();
+
+/** One problem found by a rule across fields of the `fit` block: the key it is reported at, and the message. */
+export interface FitOptionRuleProblem {
+  readonly path: (string | number)[];
+  readonly message: string;
+}
+
+/**
+ * The rules across fields of the `fit` block (fixed order needs a reason; chiSquare needs weights; no criterion
+ * with a fixed order; range.max above range.min). Kept apart from the schema so they can run on the fields that
+ * are valid even when another field is not: zod runs a block's refinement only when every field parses.
+ * @example fitOptionRules({ order: 3 }) // => [{ path: ['order'], message: "is a fixed order but 'fit.reason' does not say why" }]
+ */
+export function fitOptionRules(fit: {
+  readonly order?: number | 'auto' | undefined;
+  readonly reason?: string | undefined;
+  readonly criterion?: string | undefined;
+  readonly weights?: string | undefined;
+  readonly range?: { readonly min?: number | undefined; readonly max?: number | undefined } | undefined;
+}): FitOptionRuleProblem[] {
+  const problems: FitOptionRuleProblem[] = [];
+  if (typeof fit.order === 'number' && fit.reason === undefined) {
+    problems.push({ path: ['order'], message: "is a fixed order but 'fit.reason' does not say why" });
+  }
+  if (fit.criterion === 'chiSquare' && fit.weights !== 'uncertainty') {
+    problems.push({ path: ['criterion'], message: "is 'chiSquare', which needs weights: uncertainty" });
+  }
+  if (typeof fit.order === 'number' && fit.criterion !== undefined) {
+    problems.push({ path: ['criterion'], message: 'has no effect when the order is fixed' });
+  }
+  if (fit.range?.min !== undefined && fit.range.max !== undefined && !(fit.range.min < fit.range.max)) {
+    problems.push({ path: ['range', 'max'], message: 'must be greater than range.min' });
+  }
+  return problems;
+}
+
+/** The `fit` block. Every field has a default, so the block itself may be left out. */
+export const fitOptionsSchema = fitOptionsFieldsSchema.superRefine((fit, context) => {
+  for (const problem of fitOptionRules(fit)) context.addIssue({ code: z.ZodIssueCode.custom, path: problem.path, message: problem.message });
+});
 
 export type FitOptionsInput = z.input<typeof fitOptionsSchema>;
 export type FitSettings = z.output<typeof fitOptionsSchema>;

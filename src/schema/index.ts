@@ -3,7 +3,7 @@
  */
 
 // metadata file
-export { correlationMetaSchema, statedUncertaintySchema, METADATA_FILE, SLUG_PATTERN } from './correlationMeta.ts';
+export { correlationMetaSchema, statedUncertaintySchema, metaRules, METADATA_FILE, SLUG_PATTERN } from './correlationMeta.ts';
 export type { CorrelationMeta, CorrelationMetaInput } from './correlationMeta.ts';
 
 // handbook settings file
@@ -30,6 +30,8 @@ export { dataColumnsSchema } from './dataColumns.ts';
 export type { DataColumns } from './dataColumns.ts';
 export {
   fitOptionsSchema,
+  fitOptionsFieldsSchema,
+  fitOptionRules,
   passThroughSchema,
   exclusionSchema,
   rangeSchema,
@@ -38,7 +40,7 @@ export {
   CRITERIA,
   ORDER_LIMIT,
 } from './fitOptions.ts';
-export type { FitSettings, FitOptionsInput, PassThrough, Exclusion } from './fitOptions.ts';
+export type { FitSettings, FitOptionsInput, PassThrough, Exclusion, FitOptionRuleProblem } from './fitOptions.ts';
 
 // loaded entry
 export {

@@ -119,6 +119,25 @@ const CASES: [string, string[]][] = [
   ['order-too-high', [
     "liquid-a/correlation.yaml:24:10: order 9 needs at least 11 points, but 8 are used",
   ]],
+  // Every problem of two folders from one run: schema errors (a misspelt enum value, a string for a number, an
+  // unknown key, an impossible date) do not hide the rule across fields (fixed order without a reason) nor the checks
+  // of the data against the metadata (exclusion past the end, widened range, pass-through outside the range, ln of
+  // a negative y, ln of a negative x in a file that also has a non-numeric cell). Expected list written by hand
+  // from the fixture files (line and column of each offending value).
+  ['many-mistakes', [
+    "liquid-a/correlation.yaml:17:11: 'source.method' is 'measurd'; expected one of: measured, table, derived; did you mean 'measured'?",
+    "liquid-a/correlation.yaml:24:10: 'fit.order' is a fixed order but 'fit.reason' does not say why",
+    "liquid-a/correlation.yaml:25:13: 'fit.maxOrder' must be a number, not a string",
+    "liquid-a/correlation.yaml:29:12: fit.exclude[0].row is 12 but the data file has 8 rows",
+    "liquid-a/correlation.yaml:32:10: fit.range.max 400 is outside the x range of the data (280 to 350); the validity range can be narrowed, never widened",
+    "liquid-a/correlation.yaml:34:10: pass-through point x = 270 is outside the validity range 280 to 400",
+    "liquid-a/correlation.yaml:37:1: unknown key 'tagz'; did you mean 'tags'?",
+    "liquid-a/data.csv:5:5: y = -1938.2 is not positive, but fit.transform.y is 'log'; leave the row out with fit.exclude, or choose another transform",
+    "liquid-b/correlation.yaml:17:9: 'source.date' must be a date written as YYYY-MM-DD",
+    "liquid-b/correlation.yaml:26:12: fit.exclude[0].row is 9 but the data file has 4 rows",
+    "liquid-b/data.csv:3:5: non-numeric value 'n/a' in column 'cp'",
+    "liquid-b/data.csv:4:1: x = -300 is not positive, but fit.transform.x is 'log'; leave the row out with fit.exclude, or choose another transform",
+  ]],
   ['settings-bad', [
     "handbook.yaml:3:1: unknown key 'titel'; did you mean 'title'?",
     "handbook.yaml:5:6: 'url' must be an absolute http:// or https:// address with no query, fragment or password, e.g. https://handbook.example.org",
