@@ -1,5 +1,5 @@
 /**
- * The `correlary` command line: dispatches to `fit`, `check` and `new`. User errors print one line and no stack
+ * The `correlary` command line: dispatches to `fit`, `check`, `new`, `approve`, `withdraw` and `build`. User errors print one line and no stack
  * trace; the exit status is 0 on success, 1 on bad data, 2 on bad usage.
  */
 import { CliError } from './cliError.ts';
@@ -10,6 +10,8 @@ commands:
   fit <file.csv>   fit one table and report the correlation (--json for machine-readable output)
   check [DIR]      validate and fit every correlation in a handbook folder (default: content)
   new <slug>       create a commented template for a new correlation
+  approve <slug>   record an approval bound to the correlation's current fingerprint (--by NAME)
+  withdraw <slug>  mark a correlation withdrawn, naming the reason and its replacement (--reason TEXT)
   build            build a handbook folder into a static site (--content DIR, --out DIR, --base PATH)`;
 
 export async function main(args: readonly string[]): Promise<number> {
@@ -27,6 +29,14 @@ export async function main(args: readonly string[]): Promise<number> {
       case 'new': {
         const { runNew } = await import('./new.ts');
         return await runNew(rest);
+      }
+      case 'approve': {
+        const { runApprove } = await import('./approve.ts');
+        return await runApprove(rest);
+      }
+      case 'withdraw': {
+        const { runWithdraw } = await import('./withdraw.ts');
+        return await runWithdraw(rest);
       }
       case 'build': {
         const { runBuild } = await import('./build.ts');
