@@ -38,6 +38,7 @@ export function fitReport(record: CorrelationRecord, fit: PolynomialFit, file: s
     lines.push('');
   }
   lines.push(`Coefficients of ascending powers of u = ${record.transforms.u} (print at least the digits shown):`);
+  lines.push(`  (standard errors ${fit.uncertaintyScale === 'stated' ? 'from the stated uncertainties, taken as known (χ² mode): not rescaled by the scatter' : fit.weighted ? 'from the stated uncertainties, scaled by the residual scatter (reduced χ²)' : 'scaled by the residual scatter'})`);
   lines.push(`  ${pad('k', 4)}${pad('a_k', 26)}${pad('std. error', 14)}${Math.round(fit.confidence * 100)} % interval`);
   fit.coefficients.forEach((a, k) => {
     if (k === 0 && !fit.intercept) return;
@@ -66,8 +67,12 @@ export function fitReport(record: CorrelationRecord, fit: PolynomialFit, file: s
     }
   }
   lines.push('');
-  lines.push('Check values (full-precision coefficients; evaluate your copy of the equation here):');
-  for (const check of record.checkValues) lines.push(`  x = ${pad(`${check.x}${xUnit}`, 22)} y = ${check.y}${yUnit}`);
+  lines.push('Check values (evaluate your copy of the equation here): the printed equation must agree within the');
+  lines.push('tolerance (a one-digit copy error in any coefficient misses at least one); full-precision coefficients give the last column:');
+  record.checkValues.forEach((check, i) => {
+    const printed = record.printedCheckValues[i];
+    lines.push(`  x = ${pad(`${check.x}${xUnit}`, 18)} y = ${pad(`${printed ? `${printed.y} ± ${formatNumber(printed.tolerance, 1)}` : '—'}${yUnit}`, 40)} full precision: ${check.y}${yUnit}`);
+  });
   if (record.warnings.length) {
     lines.push('');
     lines.push('Warnings:');

@@ -1,14 +1,19 @@
 /**
- * Conversion of polynomial coefficients between the mapped variable t = (u − c)/h and the power basis of u.
+ * Conversion of polynomial coefficients between the mapped variable t = (u − c)/h and the power basis of u, in
+ * exact rational arithmetic.
  *
- * Σ_j b_j t^j = Σ_j b_j (u − c)^j / h^j = Σ_k a_k u^k with a_k = Σ_{j≥k} b_j · C(j,k) · (−c)^(j−k) / h^j.
- * The sum is formed in exact rational arithmetic from the binary values of b, c and h, so the only error in a_k
- * is the one already present in b (amplified by the conversion's own condition, which a far-from-zero c makes
- * large — that is why the mapped form is published too). The covariance is transformed as T·Σ·Tᵀ in floating point.
+ * The centre c and half-width h are short decimals (domainMapFor) and are read as the decimals they print as, so
+ * the conversion is exact both ways:
+ *   power from mapped:  a_k = Σ_{j≥k} b_j · C(j,k) · (−c)^(j−k) / h^j
+ *   mapped from power:  b_j = Σ_{k≥j} a_k · C(k,j) · c^(k−j) · h^j
+ * (binomial expansion of (u − c)^j and of u^k = (c + h·t)^k). The published mapped form is the second one applied to
+ * the exactly certified power coefficients, so both forms are the same certified polynomial, each rounded once to
+ * double. The covariance is transformed as T·Σ·Tᵀ in floating point (it is a diagnostic, not a certified value).
  *
  * Cost: O(m²) rational operations.
  */
-import { fromDouble, rational, toNumber, type Rational } from './exact/rational.ts';
+import { decimalRational } from './exact/decimal.ts';
+import { add, multiply, rational, reduce, toNumber, type Rational } from './exact/rational.ts';
 import type { DomainMap } from './types.ts';
 
 function binomial(n: number, k: number): bigint {
@@ -17,55 +22,76 @@ function binomial(n: number, k: number): bigint {
   return result;
 }
 
-/** Matrix T (rows k, columns j) with a = T·b, as exact rationals. */
-function conversionMatrix(map: DomainMap, size: number): Rational[][] {
-  const c = fromDouble(map.center);
-  const h = fromDouble(map.halfWidth);
-  const rows: Rational[][] = [];
-  for (let k = 0; k < size; k++) {
-    const row: Rational[] = [];
-    for (let j = 0; j < size; j++) {
-      if (j < k) {
-        row.push(rational(0n));
-        continue;
-      }
-      // C(j,k)·(−c)^(j−k)/h^j
+function power(value: Rational, exponent: number): Rational {
+  return rational(value.num ** BigInt(exponent), value.den ** BigInt(exponent));
+}
+
+/** Matrix T (rows k, columns j) with a = T·b, as exact rationals: C(j,k)·(−c)^(j−k)/h^j for j ≥ k. */
+function powerFromMappedMatrix(map: DomainMap, size: number): Rational[][] {
+  const c = decimalRational(map.center);
+  const h = decimalRational(map.halfWidth);
+  return Array.from({ length: size }, (_, k) =>
+    Array.from({ length: size }, (_, j) => {
+      if (j < k) return rational(0n);
       const e = j - k;
-      const num = binomial(j, k) * (-c.num) ** BigInt(e) * h.den ** BigInt(j);
-      const den = c.den ** BigInt(e) * h.num ** BigInt(j);
-      row.push(rational(num, den));
-    }
-    rows.push(row);
-  }
-  return rows;
+      return rational(binomial(j, k) * (-c.num) ** BigInt(e) * h.den ** BigInt(j), c.den ** BigInt(e) * h.num ** BigInt(j));
+    }),
+  );
 }
 
-/** Power-basis coefficients a (in u) from mapped coefficients b (in t). @example mappedToPower([1, 1], { center: 2, halfWidth: 1 }) // => [-1, 1] */
+function apply(matrix: readonly (readonly Rational[])[], vector: readonly Rational[]): Rational[] {
+  return matrix.map((row) => reduce(row.reduce((sum, entry, j) => (entry.num === 0n || vector[j]!.num === 0n ? sum : add(sum, multiply(entry, vector[j]!))), rational(0n))));
+}
+
+/**
+ * Exact power-basis coefficients a (in u) from exact mapped coefficients b (in t).
+ * @example powerFromMappedExact([rational(1n), rational(1n)], { center: 2, halfWidth: 1 }).map(toNumber) // => [-1, 1]
+ */
+export function powerFromMappedExact(mapped: readonly Rational[], map: DomainMap): Rational[] {
+  return apply(powerFromMappedMatrix(map, mapped.length), mapped);
+}
+
+/**
+ * Exact mapped coefficients b (in t = (u − c)/h) from exact power-basis coefficients a (in u).
+ * @example mappedFromPowerExact([rational(-1n), rational(1n)], { center: 2, halfWidth: 1 }).map(toNumber) // => [1, 1]
+ */
+export function mappedFromPowerExact(coefficients: readonly Rational[], map: DomainMap): Rational[] {
+  const c = decimalRational(map.center);
+  const h = decimalRational(map.halfWidth);
+  const size = coefficients.length;
+  const matrix = Array.from({ length: size }, (_, j) =>
+    Array.from({ length: size }, (_, k) => (k < j ? rational(0n) : multiply(rational(binomial(k, j)), multiply(power(c, k - j), power(h, j))))),
+  );
+  return apply(matrix, coefficients);
+}
+
+/**
+ * Power-basis coefficients a (in u) from mapped coefficients b (in t), both as doubles; b is read exactly as the
+ * binary values it holds, and each a_k is the nearest double to the exact sum.
+ * @example mappedToPower([1, 1], { center: 2, halfWidth: 1 }) // => [-1, 1]
+ */
 export function mappedToPower(mapped: readonly number[], map: DomainMap): number[] {
-  const T = conversionMatrix(map, mapped.length);
-  const b = mapped.map(fromDouble);
-  return T.map((row) => {
-    let num = 0n;
-    let den = 1n;
-    row.forEach((entry, j) => {
-      const term = b[j]!;
-      if (entry.num === 0n || term.num === 0n) return;
-      const tn = entry.num * term.num;
-      const td = entry.den * term.den;
-      num = num * td + tn * den;
-      den = den * td;
-    });
-    return toNumber(rational(num, den));
-  });
+  return powerFromMappedExact(mapped.map((value) => binaryRational(value)), map).map(toNumber);
 }
 
-/** Covariance of a = T·b given the covariance of b. */
-export function mappedCovarianceToPower(
-  covariance: readonly (readonly number[])[],
-  map: DomainMap,
-): number[][] {
-  const size = covariance.length;
-  const T = conversionMatrix(map, size).map((row) => row.map(toNumber));
+/** Exact value of a double (dyadic rational). */
+function binaryRational(value: number): Rational {
+  if (value === 0) return rational(0n);
+  let mantissa = value;
+  let exponent = 0;
+  while (!Number.isInteger(mantissa)) {
+    mantissa *= 2;
+    exponent += 1;
+  }
+  return rational(BigInt(mantissa), 1n << BigInt(exponent));
+}
+
+/**
+ * Covariance of a = T·b given the covariance of b (floating point).
+ * @example mappedCovarianceToPower([[1, 0], [0, 1]], { center: 0, halfWidth: 2 }) // => [[1, 0], [0, 0.25]]
+ */
+export function mappedCovarianceToPower(covariance: readonly (readonly number[])[], map: DomainMap): number[][] {
+  const T = powerFromMappedMatrix(map, covariance.length).map((row) => row.map(toNumber));
   const temp = T.map((row) => covariance[0]!.map((_, l) => row.reduce((sum, value, j) => sum + value * covariance[j]![l]!, 0)));
   return temp.map((row) => T.map((other) => row.reduce((sum, value, l) => sum + value * other[l]!, 0)));
 }

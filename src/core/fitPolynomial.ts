@@ -8,8 +8,15 @@
  * under a transform, from the transformed values as computed — so every printed digit is right however
  * ill-conditioned the power basis is.
  *
+ * Every published form comes from the certified coefficients: the mapped form by exact conversion of basis (its
+ * centre and half-width are short decimals, so the conversion is exact), the full-precision check values by exact
+ * evaluation, the printed equation and its check values from the printed decimals (see checkValues.ts). The
+ * floating-point QR gives the diagnostics (leverages, studentized residuals, PRESS, condition numbers).
+ *
  * Weights: a standard uncertainty σ_i of y gives w_i = 1/σ_i²; under ln y it is propagated as σ_i/y_i.
- * Standard errors are scaled by the residual variance (s²·(XᵀWX)⁻¹), as in the NIST StRD certified values.
+ * Standard errors are scaled by the residual variance (s²·(XᵀWX)⁻¹), as in the NIST StRD certified values, except in
+ * χ² mode (uncertaintyScale 'stated'), where σ is taken as known and (XᵀWX)⁻¹ is used unscaled. The digits rule and
+ * the prediction band use the local uncertainty at x (stats/localUncertainty.ts).
  *
  * Cost: O(n·m²) floating point, plus the exact certification (big-integer, grows with digits and m).
  *
@@ -18,18 +25,20 @@
  */
 import { designMatrix } from './designMatrix.ts';
 import { domainMapFor, toUnit } from './domain.ts';
-import { mappedCovarianceToPower, mappedToPower } from './convertBasis.ts';
-import { chiSquareUpperP, tQuantile } from './distributions.ts';
+import { checkPoints, fullCheckValues, printedForm } from './checkValues.ts';
+import { mappedCovarianceToPower, mappedFromPowerExact, mappedToPower } from './convertBasis.ts';
+import { chiSquareUpperP, normalQuantile, tQuantile } from './distributions.ts';
 import { evaluateFit, horner } from './evaluate.ts';
+import { toNumber } from './exact/rational.ts';
+import { localUncertainty, uncertaintyProfile } from './stats/localUncertainty.ts';
 import { exactLeastSquares } from './exact/exactLeastSquares.ts';
 import { FitError } from './fitError.ts';
-import { roundSignificant } from './format/roundSignificant.ts';
 import { significantDigits } from './format/significantDigits.ts';
 import { conditionNumber, solveLeastSquares } from './leastSquares.ts';
 import { lackOfFit } from './stats/lackOfFit.ts';
 import { residualStatistics, totalSumOfSquares } from './stats/residualStatistics.ts';
 import { runsTest } from './stats/runsTest.ts';
-import { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+import { fittedSpaceWeights, forwardX, forwardY, inverseX, inverseY, transformData } from './transforms.ts';
 import { validateFitInput } from './validateFitInput.ts';
 import type { FitData, FitOptions, PolynomialFit } from './types.ts';
 
@@ -38,6 +47,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const n = data.x.length;
   const { u, v } = transformData(data.x, data.y, transformX, transformY);
   const weighted = data.uncertainty !== undefined;
+  const uncertaintyScale = weighted && options.uncertaintyScale === 'stated' ? 'stated' : 'scatter';
   const weights = data.uncertainty ? fittedSpaceWeights(data.y, data.uncertainty, transformY) : new Array<number>(n).fill(1);
   const rootWeights = weights.map(Math.sqrt);
 
@@ -76,19 +86,20 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const summary = residualStatistics(weightedResiduals, solution.leverage, parameters, total, centred);
   const dof = n - parameters;
 
-  // Full-length mapped coefficients and covariance (zero entries for a fixed a₀).
+  // Full-length mapped coefficients and unscaled covariance (zero entries for a fixed a₀), from the QR.
   const size = order + 1;
-  const mappedCoefficients = new Array<number>(size).fill(0);
-  const mappedCovariance = Array.from({ length: size }, () => new Array<number>(size).fill(0));
+  let mappedCoefficients = new Array<number>(size).fill(0);
+  const unscaledMapped = Array.from({ length: size }, () => new Array<number>(size).fill(0));
   powers.forEach((k, j) => {
     mappedCoefficients[k] = solution.beta[j]!;
     powers.forEach((l, i) => {
-      mappedCovariance[k]![l] = summary.residualVariance * solution.unscaledCovariance[j]![i]!;
+      unscaledMapped[k]![l] = solution.unscaledCovariance[j]![i]!;
     });
   });
   let coefficients = mappedToPower(mappedCoefficients, map);
   if (!intercept) coefficients[0] = 0;
-  let covariance = mappedCovarianceToPower(mappedCovariance, map);
+  const covarianceFactor = (variance: number) => (uncertaintyScale === 'stated' ? 1 : variance);
+  let covariance = mappedCovarianceToPower(unscaledMapped.map((row) => row.map((value) => value * covarianceFactor(summary.residualVariance))), map);
   let residualStats = {
     residualSumOfSquares: summary.residualSumOfSquares,
     residualVariance: summary.residualVariance,
@@ -96,10 +107,12 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     rSquared: summary.rSquared,
   };
   let refinement: 'exact-rational' | 'none' = 'none';
+  let exactCoefficients = null;
   if (options.exact !== 'off') {
-    const exact = exactLeastSquares({ u, v, weights: weighted ? weights : undefined, order, intercept, constraints: cu.map((value, i) => ({ u: value, v: cv[i]! })) });
+    const exact = exactLeastSquares({ u, v, weights: weighted ? weights : undefined, order, intercept, constraints: cu.map((value, i) => ({ u: value, v: cv[i]! })), covarianceScale: uncertaintyScale });
     if (exact) {
       coefficients = exact.coefficients;
+      exactCoefficients = exact.exactCoefficients;
       covariance = exact.covariance;
       residualStats = {
         residualSumOfSquares: exact.residualSumOfSquares,
@@ -108,10 +121,14 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
         rSquared: exact.rSquared,
       };
       refinement = 'exact-rational';
+      // The mapped form is the certified polynomial in t, by exact change of basis (rounded once per coefficient).
+      mappedCoefficients = mappedFromPowerExact(exactCoefficients, map).map(toNumber);
     }
   }
+  const mappedCovariance = unscaledMapped.map((row) => row.map((value) => value * covarianceFactor(residualStats.residualVariance)));
   const standardErrors = covariance.map((row, k) => Math.sqrt(Math.max(0, row[k]!)));
-  const quantile = dof > 0 ? tQuantile((1 + confidence) / 2, dof) : NaN;
+  // With σ known (χ² mode) the coefficients are normal; with σ estimated from the scatter, Student's t.
+  const quantile = uncertaintyScale === 'stated' ? normalQuantile((1 + confidence) / 2) : dof > 0 ? tQuantile((1 + confidence) / 2, dof) : NaN;
   const confidenceIntervals = coefficients.map((a, k) => [a - quantile * standardErrors[k]!, a + quantile * standardErrors[k]!] as const);
 
   const fittedY = fittedV.map((value) => inverseY(transformY, value));
@@ -119,22 +136,28 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const maxAbs = (values: readonly number[]) => values.reduce((m, value) => Math.max(m, Math.abs(value)), 0);
   const maxRel = (values: readonly number[], reference: readonly number[]) =>
     values.reduce((m, value, i) => (reference[i] !== 0 ? Math.max(m, Math.abs(value / reference[i]!)) : m), 0);
-  const xOrder = data.x.map((_, i) => i).sort((a, b) => data.x[a]! - data.x[b]!);
   const scaleV = maxAbs(v);
+  const profile = weighted ? uncertaintyProfile(data.x, weights.map((w) => 1 / Math.sqrt(w))) : null;
   const unweightedSd = dof > 0 ? Math.sqrt(residuals.reduce((sum, r) => sum + r * r, 0) / dof) : 0;
-  const digitTolerance = Math.max(0.01 * unweightedSd, 1e-13 * scaleV) || 1e-300;
+  const floor = 1e-13 * scaleV || 1e-300;
+  // Digits rule: rounding the printed coefficients may move the curve by at most 1 % of the uncertainty of a new
+  // observation at each x — the local stated σ (scaled as the band is) for a weighted fit, s otherwise.
+  const localAt = (x: number) =>
+    profile === null ? unweightedSd : localUncertainty({ uncertaintyProfile: profile, uncertaintyScale, statistics: { residualStdDev: residualStats.residualStdDev } as PolynomialFit['statistics'] }, x);
+  const digitTolerance = (uValue: number) => Math.max(0.01 * (localAt(inverseX(transformX, uValue)) || 0), floor);
 
   const partial = { transformX, transformY, mapped: { map, coefficients: mappedCoefficients, covariance: mappedCovariance }, range, order };
   // Seven check points: both range ends exactly, interior points rounded to a short decimal (easy to type).
-  const span = range.max - range.min;
-  const unit = 10 ** (Math.floor(Math.log10(span)) - 2);
+  const xs = checkPoints(range);
   const uLow = forwardX(transformX, range.min);
   const uHigh = forwardX(transformX, range.max);
-  const checkValues = Array.from({ length: 7 }, (_, i) => {
-    const x = i === 0 ? range.min : i === 6 ? range.max : roundSignificant(Math.round((range.min + (span * i) / 6) / unit) * unit, 15);
-    return { x, y: evaluateFit(partial, x).y };
-  });
-  // A new observation is taken to carry the RMS of the stated uncertainties (in the fitted space).
+  const checkValues = exactCoefficients
+    ? fullCheckValues(exactCoefficients, transformX, transformY, xs)
+    : xs.map((x) => ({ x, y: evaluateFit(partial, x).y }));
+  const askedDigits = significantDigits(coefficients, Math.min(uLow, uHigh), Math.max(uLow, uHigh), digitTolerance);
+  const fixed = coefficients.map((_, k) => k === 0 && !intercept);
+  const printed = printedForm(coefficients, askedDigits, fixed, transformX, transformY, xs);
+  // Kept for older readers: a new observation carries the RMS of the stated uncertainties (in the fitted space).
   const meanSquareSigma = weighted ? weights.reduce((sum, w) => sum + 1 / w, 0) / n : 1;
 
   const warnings: string[] = [];
@@ -145,7 +168,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const powerFormWorst = checkValues.reduce((worst, check) => {
     const viaPowers = horner(coefficients, forwardX(transformX, check.x));
     const viaMapped = forwardY(transformY, check.y);
-    return Math.max(worst, Math.abs(viaPowers - viaMapped) / Math.max(Math.abs(viaMapped), digitTolerance));
+    return Math.max(worst, Math.abs(viaPowers - viaMapped) / Math.max(Math.abs(viaMapped), digitTolerance(forwardX(transformX, check.x))));
   }, 0);
   if (!(powerFormWorst < 1e-6)) {
     warnings.push('the power-basis coefficients do not reproduce the fit in double precision (x is too large or too small for its powers); use the mapped form, or change the unit of x');
@@ -167,8 +190,12 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     confidenceIntervals,
     covariance,
     mapped: partial.mapped,
-    significantDigits: significantDigits(coefficients, Math.min(uLow, uHigh), Math.max(uLow, uHigh), digitTolerance),
+    significantDigits: printed.digits,
+    printedCoefficients: printed.printed,
     checkValues,
+    printedCheckValues: printed.checkValues,
+    uncertaintyScale,
+    uncertaintyProfile: profile,
     confidence,
     predictionScale: meanSquareSigma,
     statistics: {
@@ -194,7 +221,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       chiSquareP: weighted && dof > 0 ? chiSquareUpperP(residualStats.residualSumOfSquares, dof) : null,
     },
     lackOfFit: lackOfFit(u, v, weights, summary.residualSumOfSquares, parameters),
-    runsTest: runsTest(xOrder, residuals, 1e-14 * (scaleV || 1)),
+    runsTest: runsTest(u, residuals, 1e-14 * (scaleV || 1)),
     points: {
       x: data.x.slice(),
       y: data.y.slice(),

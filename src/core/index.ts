@@ -10,9 +10,17 @@ export { fitPolynomial } from './fitPolynomial.ts';
 export { fitOrders, type OrderFit } from './fitOrders.ts';
 export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';
+export { transformDomainProblem } from './transformDomainProblem.ts';
 export { domainMap, domainMapFor, roundToPlace, roundUpShort, shortDecimal, toUnit } from './domain.ts';
-export { mappedToPower, mappedCovarianceToPower } from './convertBasis.ts';
-export { fittedSpaceWeights, forwardX, forwardY, inverseY, transformData } from './transforms.ts';
+export { mappedToPower, mappedCovarianceToPower, mappedFromPowerExact, powerFromMappedExact } from './convertBasis.ts';
+
+// Exact arithmetic (certification)
+export { add, compare, divide, fromDouble, gcd, multiply, rational, reduce, subtract, timesPowerOfTen, toNumber, type Rational } from './exact/rational.ts';
+export { decimalParts, decimalRational, minExponent, parseDecimal, scaleToIntegers } from './exact/decimal.ts';
+export { solveExact, type ExactSolution } from './exact/bareiss.ts';
+export { exactLeastSquares, type ExactProblem, type ExactResult } from './exact/exactLeastSquares.ts';
+export { evaluateExact } from './exact/evaluateExact.ts';
+export { fittedSpaceWeights, forwardX, forwardY, inverseX, inverseY, transformData } from './transforms.ts';
 
 // Order selection (criteria, the default rule, the candidate-order table)
 export * from './order/index.ts';
@@ -20,6 +28,9 @@ export * from './order/index.ts';
 // Evaluation and bands
 export { evaluateFit, basisAt, horner, type Evaluation } from './evaluate.ts';
 export { bands, type BandPoint } from './stats/bands.ts';
+export { localUncertainty, profileAt, uncertaintyProfile } from './stats/localUncertainty.ts';
+export { runsTest } from './stats/runsTest.ts';
+export { checkPoints, exactU, fullCheckValues, lastPrintedPlace, printedForm, type PrintedForm } from './checkValues.ts';
 
 // Formatting for publication
 export { CAUTIONS, cautionsFor } from './format/cautions.ts';

@@ -12,6 +12,13 @@ export function forwardX(transform: TransformX, x: number): number {
   return x;
 }
 
+/** Undo the x transform. @example inverseX('reciprocal', 0.004) // => 250 */
+export function inverseX(transform: TransformX, u: number): number {
+  if (transform === 'reciprocal') return 1 / u;
+  if (transform === 'log') return Math.exp(u);
+  return u;
+}
+
 /** Apply the y transform to one value. */
 export function forwardY(transform: TransformY, y: number): number {
   return transform === 'log' ? Math.log(y) : y;

@@ -46,6 +46,11 @@ export interface FitOptions {
   /** Confidence level for intervals and bands, in (0, 1); default 0.95. */
   readonly confidence?: number;
   /**
+   * 'stated': the per-point σ are taken as known (χ² mode): coefficient uncertainties and bands use them unscaled.
+   * 'scatter' (default): scaled by the residual scatter.
+   */
+  readonly uncertaintyScale?: 'stated' | 'scatter';
+  /**
    * Exact rational certification of the coefficients and their statistics (default 'auto'). Without transforms
    * the inputs are the decimals the user wrote; under a transform, the transformed values as computed (the
    * transform's own rounding, half an ulp, is then part of the data). 'off' keeps the floating-point solution.
@@ -59,10 +64,26 @@ export interface DomainMap {
   readonly halfWidth: number;
 }
 
-/** One row of the check-values table: evaluate your copied implementation at x and compare with y. */
+/**
+ * One full-precision check value: y at x from the certified coefficients (exact evaluation, rounded once), for
+ * implementations that use the full downloaded coefficients; tolerance bounds the error of a correct
+ * double-precision implementation at x.
+ */
 export interface CheckValue {
   readonly x: number;
   readonly y: number;
+  readonly tolerance?: number;
+}
+
+/**
+ * One printed check value: y at x from the PRINTED coefficients, as text with the digits a correct copy reproduces.
+ * A correct copy of the printed equation agrees with y within ± tolerance (one unit in y's last digit); a copy with
+ * any single coefficient's last digit changed by ±1 misses at least one printed check value by more than that.
+ */
+export interface PrintedCheckValue {
+  readonly x: number;
+  readonly y: string;
+  readonly tolerance: number;
 }
 
 /** Residual statistics of one fit, in the fitted space unless the name says otherwise. */
@@ -159,11 +180,29 @@ export interface PolynomialFit {
     readonly coefficients: readonly number[];
     readonly covariance: readonly (readonly number[])[];
   };
-  /** Significant digits to print for each power-basis coefficient (see significantDigits). */
+  /** Significant digits to print for each power-basis coefficient (see significantDigits and checkValues.ts). */
   readonly significantDigits: readonly number[];
+  /** The power-basis coefficients as printed (each rounded to its significant digits; "0" for a fixed a₀). */
+  readonly printedCoefficients: readonly string[];
+  /** Full-precision check values (certified coefficients, exact evaluation). */
   readonly checkValues: readonly CheckValue[];
+  /** Check values of the printed equation, with their tolerance (see checkValues.ts). */
+  readonly printedCheckValues: readonly PrintedCheckValue[];
+  /**
+   * How coefficient uncertainties and bands are scaled: 'stated' — from the stated σ as known, unscaled (χ² mode);
+   * 'scatter' — scaled by the residual scatter s² (unweighted fits, and weighted fits outside χ² mode).
+   */
+  readonly uncertaintyScale: 'stated' | 'scatter';
+  /**
+   * Stated standard uncertainty in the fitted space per distinct x (sorted; replicates combined as RMS), from which
+   * the local uncertainty at any x is interpolated; null for an unweighted fit.
+   */
+  readonly uncertaintyProfile: { readonly x: readonly number[]; readonly sigma: readonly number[] } | null;
   readonly confidence: number;
-  /** Variance of a new observation relative to s² (1 unweighted; 1/w for a point of RMS stated uncertainty). */
+  /**
+   * Variance of a new observation relative to s² for an unweighted fit (1); for a weighted fit the RMS of the stated
+   * σ² in the fitted space (kept for older readers; bands use the local uncertainty, see localUncertainty).
+   */
   readonly predictionScale: number;
   readonly statistics: FitStatistics;
   readonly lackOfFit: LackOfFitTest | null;

@@ -2,6 +2,7 @@
  * Boundary checks for fitPolynomial: array lengths, finite numbers, positive uncertainties, a sensible order and
  * confidence level. Messages follow one grammar ("fitPolynomial requires …") and name the offending point.
  */
+import { transformDomainProblem } from './transformDomainProblem.ts';
 import { FitError } from './fitError.ts';
 import type { FitData, FitOptions, PointConstraint, TransformX, TransformY } from './types.ts';
 
@@ -85,11 +86,14 @@ export function validateFitInput(data: FitData, options: FitOptions): ValidatedO
       `the validity range [${range.min}, ${range.max}] must be a non-empty part of the data's x range [${xMin}, ${xMax}]; it can be narrowed, never widened`,
     );
   }
+  const transformX = options.transformX ?? 'identity';
+  const domainProblem = transformDomainProblem(transformX, xMin, xMax);
+  if (domainProblem !== null) throw new FitError(transformX === 'log' ? 'log-domain' : 'reciprocal-domain', domainProblem);
   return {
     range: { min: range.min, max: range.max },
     order,
     intercept,
-    transformX: options.transformX ?? 'identity',
+    transformX,
     transformY: options.transformY ?? 'identity',
     constraints,
     confidence,

@@ -39,7 +39,9 @@ export function coefficientsCsv(record: CorrelationRecord): string {
   lines.push(comment(`Form: ${record.transforms.v} = sum of a_k * u^k, u = ${record.transforms.u}, order ${record.order}, transformX ${record.transforms.x}, transformY ${record.transforms.y}, intercept ${record.intercept}, weighted ${record.weighted}`));
   lines.push(comment(`Equation (rounded to the digits needed): ${record.equation}`));
   lines.push(comment(`Mapped form: ${record.transforms.v} = sum of b_k * t^k, t = (u - ${numberField(record.mapped.center)}) / ${numberField(record.mapped.halfWidth)}, b = [${record.mapped.coefficients.map(numberField).join(', ')}]`));
-  for (const check of record.checkValues) lines.push(comment(`Check value (full-precision coefficients): x = ${numberField(check.x)} ${xUnit} gives y = ${numberField(check.y)} ${yUnit}`));
+  for (const check of record.printedCheckValues) lines.push(comment(`Check value (printed equation): x = ${numberField(check.x)} ${xUnit} gives y = ${check.y} ${yUnit} within ${numberField(check.tolerance)}`));
+  for (const check of record.checkValues) lines.push(comment(`Check value (full-precision coefficients): x = ${numberField(check.x)} ${xUnit} gives y = ${numberField(check.y)} ${yUnit}${check.tolerance === null || check.tolerance === undefined ? '' : ` within ${numberField(check.tolerance)}`}`));
+  lines.push(comment(`Coefficient uncertainties: ${record.uncertaintyScale === 'stated' ? 'from the stated uncertainties, taken as known (not rescaled)' : 'scaled by the residual scatter'}`));
   const material = record.material;
   lines.push(comment(`Material: ${[material.name, material.phase, material.pressure, material.grade, material.conditions].filter(Boolean).join('; ')}`));
   const source = record.provenance.source;

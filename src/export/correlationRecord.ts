@@ -32,7 +32,13 @@
  *   mapped               {center, halfWidth, coefficients, covariance}: v = Σ b_k t^k, t = (u − center)/halfWidth;
  *                        center and halfWidth are short decimals
  *   passThrough          [{x, y}] points the curve passes through exactly
- *   checkValues          [{x, y}] y from the full-precision coefficients
+ *   checkValues          [{x, y, tolerance}] y from the full-precision coefficients (exact evaluation, rounded
+ *                        once); tolerance bounds a correct double-precision implementation's error
+ *   printedCheckValues   [{x, y (text), tolerance}] y from the printed coefficients, to the digits a correct copy
+ *                        reproduces; a ±1 change in the last digit of any printed coefficient misses one by more
+ *                        than its tolerance
+ *   uncertaintyScale     'stated' (χ² mode: standard errors and bands from the stated σ, unscaled) or 'scatter'
+ *                        (scaled by the residual scatter)
  *   residualStdDev       s, in statisticUnit
  *   statisticUnit        what s and RMSE are measured in: y's unit, "in ln y" or "weighted, in units of σ"
  *   rSquared, n, degreesOfFreedom
@@ -114,7 +120,7 @@ export function correlationRecord(source: CorrelationSource) {
     weighted: fit.weighted,
     order: fit.order,
     coefficients: fit.coefficients,
-    printedCoefficients: printedCoefficients(fit),
+    printedCoefficients: fit.printedCoefficients ?? printedCoefficients(fit),
     significantDigits: fit.significantDigits,
     standardErrors: fit.standardErrors.map((value, k) => (k === 0 && !fit.intercept ? NaN : value)),
     confidence: fit.confidence,
@@ -129,6 +135,8 @@ export function correlationRecord(source: CorrelationSource) {
     },
     passThrough: fit.constraints,
     checkValues: fit.checkValues,
+    printedCheckValues: fit.printedCheckValues ?? [],
+    uncertaintyScale: fit.uncertaintyScale ?? 'scatter',
     residualStdDev: fit.statistics.residualStdDev,
     statisticUnit: statisticUnit(fit, meta.property.unit),
     rSquared: fit.statistics.rSquared,

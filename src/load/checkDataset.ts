@@ -6,7 +6,7 @@
  * whose cells are valid), so one run reports every problem. Checks whose verdict could change with a row that could
  * not be read (point counts, the fixed order, exclusions by x, the validity range) then wait for a complete table.
  */
-import { fixedOrderProblem } from '../core/index.ts';
+import { fixedOrderProblem, transformDomainProblem } from '../core/index.ts';
 import type { DataColumns, DataPoint, ExcludedPoint, FitSettings } from '../schema/index.ts';
 import { error, warning, type Diagnostic, type Position } from './diagnostic.ts';
 import { MINIMUM_POINTS } from './limits.ts';
@@ -99,6 +99,15 @@ export function checkDataset(input: DatasetCheckInput): DatasetCheckResult {
     }
     if (fit.transform.y === 'log' && !(point.y > 0)) {
       diagnostics.push(error(dataPath, { line: point.line, column: input.cellColumn(point.line, 'y') }, `y = ${point.y} is not positive, but fit.transform.y is 'log'`, transformHint));
+    }
+  }
+
+  // A transform whose singular point lies inside the x range (no point on it, or the per-point check says so).
+  if (used.length > 0 && !diagnostics.some((d) => d.severity === 'error' && d.file === dataPath && /reciprocal|not positive, but fit\.transform\.x/.test(d.message))) {
+    const xs = used.map((point) => point.x);
+    const problem = transformDomainProblem(fit.transform.x, Math.min(...xs), Math.max(...xs));
+    if (problem !== null) {
+      diagnostics.push(error(metadataPath, valueAt(['fit', 'transform', 'x']), `fit.transform.x is '${fit.transform.x}' but ${problem}`, 'fit x without a transform, or split the data at the singular point'));
     }
   }
 

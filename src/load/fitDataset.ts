@@ -57,6 +57,8 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
       order: selection.order,
       constraints,
       range: correlation.range,
+      // χ² mode: the stated uncertainties are taken as known, so coefficient uncertainties and bands are not rescaled.
+      uncertaintyScale: fitSettings.criterion === 'chiSquare' ? 'stated' : 'scatter',
     });
   } catch (caught) {
     if (caught instanceof FitError) diagnostics.push(fitErrorDiagnostic(correlation, caught));

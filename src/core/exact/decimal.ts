@@ -20,9 +20,11 @@ interface DecimalParts {
   readonly exponent: number;
 }
 
+import { rational, type Rational } from './rational.ts';
+
 const DECIMAL = /^(-?)(\d+)(?:\.(\d+))?(?:e([+-]\d+))?$/;
 
-/** Split a finite double into signed integer digits and a power-of-ten exponent. */
+/** Split a finite double into signed integer digits and a power-of-ten exponent. @example decimalParts(-12.5) // => { digits: -125n, exponent: -1 } */
 export function decimalParts(value: number): DecimalParts {
   if (!Number.isFinite(value)) throw new Error(`decimalParts requires a finite number, got ${value}`);
   const match = DECIMAL.exec(String(value));
@@ -41,7 +43,7 @@ export function scaleToIntegers(values: readonly number[], extraExponents: reado
   return { ints, exponent };
 }
 
-/** Smallest decimal exponent among values (0 if all are integers). */
+/** Smallest decimal exponent among values (0 if all are integers). @example minExponent([1.25, 3, 0.5]) // => -2 */
 export function minExponent(values: readonly number[]): number {
   let exponent = 0;
   for (const value of values) {
@@ -49,4 +51,27 @@ export function minExponent(values: readonly number[]): number {
     if (part.digits !== 0n && part.exponent < exponent) exponent = part.exponent;
   }
   return exponent;
+}
+
+/**
+ * The decimal a double prints as (String(value)), as an exact rational: the value the user wrote, for a number
+ * read from text with at most 15 significant digits. @example decimalRational(0.1) // => { num: 1n, den: 10n }
+ */
+export function decimalRational(value: number): Rational {
+  const { digits, exponent } = decimalParts(value);
+  return exponent >= 0 ? rational(digits * 10n ** BigInt(exponent)) : rational(digits, 10n ** BigInt(-exponent));
+}
+
+/**
+ * A decimal text as written ("-1.4674896e+3", "5e-4", "60") as an exact rational.
+ * @throws Error when the text is not a plain decimal number
+ * @example parseDecimal('-2422.701') // => { num: -2422701n, den: 1000n }
+ */
+export function parseDecimal(text: string): Rational {
+  const match = /^([+-]?)(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/.exec(text.trim());
+  if (match === null || (match[2] === '' && (match[3] ?? '') === '')) throw new Error(`parseDecimal cannot read '${text}'`);
+  const [, sign, whole = '', fraction = '', exp = '0'] = match;
+  const digits = BigInt(`${sign === '-' ? '-' : ''}${whole}${fraction}` || '0');
+  const exponent = Number(exp) - fraction.length;
+  return exponent >= 0 ? rational(digits * 10n ** BigInt(exponent)) : rational(digits, 10n ** BigInt(-exponent));
 }

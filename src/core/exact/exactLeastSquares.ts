@@ -29,11 +29,18 @@ export interface ExactProblem {
   readonly order: number;
   readonly intercept: boolean;
   readonly constraints: readonly { readonly u: number; readonly v: number }[];
+  /**
+   * 'scatter' (default): covariance s²·P, scaled by the residual variance; 'stated': P alone, for weights 1/σ²
+   * with σ taken as known (χ² mode).
+   */
+  readonly covarianceScale?: 'scatter' | 'stated';
 }
 
 export interface ExactResult {
   /** Power-basis coefficients a_0..a_m in u (a_0 = 0 without intercept), nearest doubles to the exact values. */
   readonly coefficients: number[];
+  /** The same coefficients exactly, as rationals: every published form is derived from these. */
+  readonly exactCoefficients: Rational[];
   /** Covariance s²·P of a_0..a_m (zero row/column for a fixed a_0). */
   readonly covariance: number[][];
   readonly standardErrors: number[];
@@ -44,7 +51,10 @@ export interface ExactResult {
   readonly degreesOfFreedom: number;
 }
 
-/** Exact polynomial least squares; returns null when the (bordered) normal matrix is singular. */
+/**
+ * Exact polynomial least squares; returns null when the (bordered) normal matrix is singular.
+ * @example exactLeastSquares({ u: [0, 1, 2], v: [1, 3, 5], order: 1, intercept: true, constraints: [] })?.coefficients // => [1, 2]
+ */
 export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
   const { order, intercept, constraints } = problem;
   const n = problem.u.length;
@@ -133,14 +143,17 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
 
   // a_k = β_k · 10^(ev − k·eu); Cov(a_j, a_k) = s²·P_jk · 10^(−(j+k)·eu) · 10^(−ew) (P is in the W-scaled system).
   const coefficients = new Array(order + 1).fill(0);
+  const exactCoefficients: Rational[] = Array.from({ length: order + 1 }, () => rational(0n));
+  const covarianceFactor: Rational | null = problem.covarianceScale === 'stated' ? rational(1n) : variance;
   const covariance: number[][] = Array.from({ length: order + 1 }, () => new Array(order + 1).fill(0));
   const standardErrors = new Array(order + 1).fill(0);
   for (let j = 0; j < p; j++) {
-    coefficients[powers[j]!] = toNumber(timesPowerOfTen(rational(beta[j]!, det), ev - powers[j]! * eu));
+    exactCoefficients[powers[j]!] = timesPowerOfTen(rational(beta[j]!, det), ev - powers[j]! * eu);
+    coefficients[powers[j]!] = toNumber(exactCoefficients[powers[j]!]!);
     for (let k = 0; k < p; k++) {
-      const entry = variance
+      const entry = covarianceFactor
         ? timesPowerOfTen(
-            rational(variance.num * solution.numerators[j]![1 + k]!, variance.den * det),
+            rational(covarianceFactor.num * solution.numerators[j]![1 + k]!, covarianceFactor.den * det),
             -(powers[j]! + powers[k]!) * eu - scaledW.exponent,
           )
         : null;
@@ -150,6 +163,7 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
   }
   return {
     coefficients,
+    exactCoefficients,
     covariance,
     standardErrors,
     residualSumOfSquares: toNumber(residualSumOfSquares),

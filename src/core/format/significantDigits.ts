@@ -12,25 +12,36 @@
 import { horner } from '../evaluate.ts';
 import { roundSignificant } from './roundSignificant.ts';
 
-/** Digits per coefficient. @example significantDigits([1.234567, 2.5e-3], 0, 10, 1e-3) // => one count per coefficient */
-export function significantDigits(coefficients: readonly number[], uMin: number, uMax: number, tolerance: number): number[] {
+/**
+ * Digits per coefficient. The tolerance is a number, or a function of u for a tolerance that varies over the range
+ * (1 % of the local uncertainty of a weighted fit); the first guess then uses its smallest value on the grid.
+ * @example significantDigits([1.234567, 2.5e-3], 0, 10, 1e-3) // => [4, 2]
+ */
+export function significantDigits(
+  coefficients: readonly number[],
+  uMin: number,
+  uMax: number,
+  tolerance: number | ((u: number) => number),
+): number[] {
   const p = coefficients.length;
+  const grid = Array.from({ length: 201 }, (_, i) => uMin + ((uMax - uMin) * i) / 200);
+  const allowedAt = grid.map((u) => (typeof tolerance === 'number' ? tolerance : tolerance(u)));
+  const smallest = Math.min(...allowedAt);
   const uAbsMax = Math.max(Math.abs(uMin), Math.abs(uMax));
   const digits = coefficients.map((a, k) => {
     if (a === 0) return 1;
     const exponent = Math.floor(Math.log10(Math.abs(a)));
-    const allowed = tolerance / p / Math.max(uAbsMax ** k, Number.MIN_VALUE);
+    const allowed = smallest / p / Math.max(uAbsMax ** k, Number.MIN_VALUE);
     // ½·10^(exponent − d + 1) ≤ allowed  ⇒  d ≥ exponent + 1 − log₁₀(2·allowed)
     const needed = Math.ceil(exponent + 1 - Math.log10(2 * allowed));
     return Math.min(17, Math.max(1, needed));
   });
-  const grid = Array.from({ length: 201 }, (_, i) => uMin + ((uMax - uMin) * i) / 200);
   const reference = grid.map((u) => horner(coefficients, u));
   for (let extra = 0; extra <= 17; extra++) {
     const trial = digits.map((d) => Math.min(17, d + extra));
     const rounded = coefficients.map((a, k) => roundSignificant(a, trial[k]!));
-    const worst = Math.max(...grid.map((u, i) => Math.abs(horner(rounded, u) - reference[i]!)));
-    if (worst <= tolerance || trial.every((d) => d === 17)) return trial;
+    const fits = grid.every((u, i) => Math.abs(horner(rounded, u) - reference[i]!) <= allowedAt[i]!);
+    if (fits || trial.every((d) => d === 17)) return trial;
   }
   return digits.map(() => 17);
 }

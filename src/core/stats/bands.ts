@@ -3,13 +3,15 @@
  *
  * With φ(x) the mapped basis (t^0..t^m) and Σ_b the covariance of the mapped coefficients,
  *   var_fit(x) = φᵀ Σ_b φ,                  confidence half-width = t_{(1+c)/2, dof} · √var_fit
- *   var_new(x) = var_fit(x) + s²/w_new,     prediction half-width = t_{(1+c)/2, dof} · √var_new
- * where w_new is the weight of a new observation: 1 for an unweighted fit, and for a weighted fit the weight of a
- * point with the root-mean-square of the stated uncertainties. Bands are computed in the fitted space and taken
- * back through the y transform (so they are asymmetric under ln y).
+ *   var_new(x) = var_fit(x) + σ_new(x)²,   prediction half-width = t_{(1+c)/2, dof} · √var_new
+ * where σ_new(x) is the uncertainty of a new observation at x (stats/localUncertainty.ts): s for an unweighted fit;
+ * for a weighted fit the stated σ interpolated at x, scaled by s outside χ² mode — so the band narrows where σ is
+ * small. In χ² mode (σ known) Σ_b is unscaled and the quantile is the normal one instead of Student's t.
+ * Bands are computed in the fitted space and taken back through the y transform (so they are asymmetric under ln y).
  * Reference: NIST/SEMATECH e-Handbook of Statistical Methods, §4.5.2.1–2 (https://www.itl.nist.gov/div898/handbook/).
  */
-import { tQuantile } from '../distributions.ts';
+import { normalQuantile, tQuantile } from '../distributions.ts';
+import { localUncertainty } from './localUncertainty.ts';
 import { basisAt, evaluateFit } from '../evaluate.ts';
 import { inverseY } from '../transforms.ts';
 import type { PolynomialFit } from '../types.ts';
@@ -23,7 +25,10 @@ export interface BandPoint {
   readonly predictionHigh: number;
 }
 
-/** Bands at each x (inside the range unless `extrapolate`). NaN bands when the fit has no residual dof. */
+/**
+ * Bands at each x (inside the range unless `extrapolate`). NaN bands when the fit has no residual dof.
+ * @example bands(fit, [300])[0] // => { x: 300, y: …, confidenceLow: …, confidenceHigh: …, predictionLow: …, predictionHigh: … }
+ */
 export function bands(
   fit: PolynomialFit,
   xs: readonly number[],
@@ -31,10 +36,9 @@ export function bands(
 ): BandPoint[] {
   const confidence = options.confidence ?? fit.confidence;
   const dof = fit.statistics.degreesOfFreedom;
-  const quantile = dof > 0 ? tQuantile((1 + confidence) / 2, dof) : NaN;
-  const variance = fit.statistics.residualVariance;
-  const newPointVariance = variance * fit.predictionScale;
+  const quantile = fit.uncertaintyScale === 'stated' ? normalQuantile((1 + confidence) / 2) : dof > 0 ? tQuantile((1 + confidence) / 2, dof) : NaN;
   return xs.map((x) => {
+    const newPointVariance = localUncertainty(fit, x) ** 2;
     const evaluation = evaluateFit(fit, x, { extrapolate: options.extrapolate ?? false });
     const phi = basisAt(fit, x);
     let varFit = 0;
