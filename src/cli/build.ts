@@ -72,6 +72,9 @@ export async function runBuild(args: string[]): Promise<number> {
   const root = packageRoot();
   process.env['ASTRO_TELEMETRY_DISABLED'] = '1';
   process.env['CORRELARY_CONTENT'] = content;
+  // Vite lets environment variables named like its import.meta.env keys override them; a BASE_URL left in a shell
+  // or CI environment would silently replace --base in every link.
+  for (const key of ['BASE_URL', 'SITE', 'ASSETS_PREFIX', 'MODE', 'DEV', 'PROD', 'SSR']) delete process.env[key];
   const cacheDir = path.resolve('node_modules', '.cache', 'correlary');
   const { build } = await import('astro');
   // Astro 5 stages a build whose output folder lies outside the working directory in <cwd>/.astro, imports the
