@@ -8,15 +8,20 @@
  * @example coefficientsCsv(record).split('\n').at(-2) // => "2,-145306.4927312025,6,-145306,4202.19…,…"
  */
 import type { CorrelationRecord } from './correlationRecord.ts';
+import { spreadsheetSafeText } from './spreadsheetSafeText.ts';
 
-/** Quote a CSV field when it needs it (RFC 4180). */
+/** Quote a CSV field when it needs it (RFC 4180), after making it safe to open in a spreadsheet. */
 function csvField(text: string): string {
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  const safe = spreadsheetSafeText(text);
+  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
-/** Comment text on one line. */
+/**
+ * Comment text on one line. A spreadsheet still splits the line at its commas, so every piece between commas is
+ * made spreadsheet-safe too.
+ */
 function comment(text: string): string {
-  return `# ${text.replace(/\s*[\r\n]+\s*/g, ' ')}`;
+  return `# ${text.replace(/\s*[\r\n]+\s*/g, ' ').split(',').map(spreadsheetSafeText).join(',')}`;
 }
 
 function numberField(value: number | null | undefined): string {

@@ -4,6 +4,7 @@
  */
 export { correlationRecord, RECORD_VERSION, type CorrelationRecord, type CorrelationSource } from './correlationRecord.ts';
 export { coefficientsCsv } from './coefficientsCsv.ts';
+export { spreadsheetSafeText } from './spreadsheetSafeText.ts';
 export { INVENTED_NOTICE } from './inventedNotice.ts';
 export { finiteOrNull, jsonNumbers, type Jsonified, type JsonValue } from './jsonNumbers.ts';
 export { approvalLabel, lapseReasonsText } from './approvalLabel.ts';

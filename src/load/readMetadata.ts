@@ -1,7 +1,7 @@
 /**
  * Parse and validate a correlation's metadata file, reporting every problem with its line and column.
  */
-import { LineCounter, parseDocument, type Document } from 'yaml';
+import { LineCounter, isAlias, parseDocument, visit, type Document } from 'yaml';
 import {
   correlationMetaSchema,
   dataColumnsSchema,
@@ -39,6 +39,25 @@ function yamlMessage(message: string): string {
 }
 
 /**
+ * Most alias expansions a metadata file may make (the yaml library's `maxAliasCount`): enough for any real reuse
+ * of an anchor, and it stops a file of nested aliases (a "billion laughs") from exhausting memory.
+ */
+const MAX_ALIAS_COUNT = 100;
+
+/** Line and column of the first alias in the document. */
+function firstAliasPosition(document: Document, lineCounter: LineCounter): Position {
+  let offset = 0;
+  visit(document, {
+    Alias(_key, node) {
+      if (isAlias(node) && node.range) offset = node.range[0];
+      return visit.BREAK;
+    },
+  });
+  const { line, col } = lineCounter.linePos(offset);
+  return { line, column: col };
+}
+
+/**
  * Parse YAML text (BOM already removed) and validate it against the metadata schema.
  * @param displayPath path printed in messages
  */
@@ -73,7 +92,17 @@ export function readMetadata(text: string, displayPath: string): MetadataResult 
     );
   }
 
-  const raw: unknown = document.toJS();
+  let raw: unknown;
+  try {
+    raw = document.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (caught) {
+    // yaml throws a ReferenceError when aliases expand past maxAliasCount (a "billion laughs" file).
+    if (!(caught instanceof ReferenceError)) throw caught;
+    diagnostics.push(
+      error(displayPath, firstAliasPosition(document, lineCounter), `YAML aliases (*name) expand to too much data: more than ${MAX_ALIAS_COUNT} copies`, 'write the values out instead of repeating anchors'),
+    );
+    return { meta: undefined, dataColumns: undefined, partialFit: undefined, diagnostics, valueAt };
+  }
   if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) {
     diagnostics.push(
       error(displayPath, { line: 1, column: 1 }, 'metadata must be a block of keys such as title, property, variable', "run 'correlary new <slug>' for a commented template"),

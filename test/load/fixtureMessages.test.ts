@@ -116,6 +116,10 @@ const CASES: [string, string[]][] = [
   ['yaml-syntax', [
     "liquid-a/correlation.yaml:11:3: YAML syntax error: key 'symbol' appears twice in the same block",
   ]],
+  // A "billion laughs" file: nested aliases refused at the first alias, before any expansion (yaml maxAliasCount).
+  ['yaml-aliases', [
+    "liquid-a/correlation.yaml:26:9: YAML aliases (*name) expand to too much data: more than 100 copies; write the values out instead of repeating anchors",
+  ]],
   ['order-too-high', [
     "liquid-a/correlation.yaml:24:10: order 9 needs at least 11 points, but 8 are used",
   ]],
