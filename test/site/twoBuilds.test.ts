@@ -6,6 +6,7 @@
  *   event-handler attribute or URL from content that would run, and the payloads appear as text; the CSV download
  *   holds no cell a spreadsheet would read as a formula.
  */
+import { existsSync } from 'node:fs';
 import { cp, mkdtemp, readFile, readdir, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -76,7 +77,7 @@ function textOf(node: Node): string {
 
 /** Attributes a browser treats as URLs (HTML and SVG, from memory of the HTML and SVG specifications). */
 const URL_ATTRIBUTES = new Set(['href', 'src', 'action', 'formaction', 'data', 'poster', 'xlink:href', 'srcdoc', 'background', 'ping', 'cite']);
-/** Elements that load, embed or redirect: content must never supply one of their attributes. */
+/** Elements that load, embed or redirect: content must never supply what they load. */
 const LOADING_ELEMENTS = new Set(['iframe', 'object', 'embed', 'frame', 'frameset', 'base', 'form', 'img', 'image', 'video', 'audio', 'source', 'track', 'link', 'input', 'button']);
 
 /**
@@ -95,7 +96,7 @@ function activeContent(html: string): string[] {
       if (name.startsWith('on')) problems.push(`<${tag} ${name}="${attribute.value}">`);
       if (URL_ATTRIBUTES.has(name) && /^(javascript|vbscript|data):/.test(url)) problems.push(`<${tag} ${name}="${attribute.value}">`);
       if (name === 'style' && /javascript:|expression\(|url\(/.test(url) && attribute.value.includes(MARKER)) problems.push(`<${tag} style="${attribute.value}">`);
-      if (LOADING_ELEMENTS.has(tag) && attribute.value.includes(MARKER)) problems.push(`<${tag} ${name}> made from content`);
+      if (LOADING_ELEMENTS.has(tag) && (URL_ATTRIBUTES.has(name) || name === 'srcset' || name === 'type') && attribute.value.includes(MARKER)) problems.push(`<${tag} ${name}> made from content`);
       if (tag === 'meta' && name === 'http-equiv') problems.push(`<meta http-equiv="${attribute.value}">`);
     }
     if (tag === 'script') {
@@ -135,7 +136,8 @@ describe('two builds of the same handbook', () => {
 describe('content cannot run in a reader’s browser or spreadsheet', () => {
   it('every built page parses to no element, event handler or URL from content that would run', async () => {
     const dist = outputs[0]!;
-    const pages = (await filesUnder(dist)).filter((file) => file.endsWith('.html'));
+    // SVG files are parsed the same way: an SVG opened on its own runs its scripts and handlers.
+    const pages = (await filesUnder(dist)).filter((file) => file.endsWith('.html') || file.endsWith('.svg'));
     expect(pages.length).toBeGreaterThan(hostileSlugs.length);
     const problems: string[] = [];
     for (const page of pages) for (const problem of activeContent(await readFile(path.join(dist, page), 'utf8'))) problems.push(`${page}: ${problem}`);
@@ -149,6 +151,8 @@ describe('content cannot run in a reader’s browser or spreadsheet', () => {
       const text = textOf(document);
       expect(text, `hostile-${index}`).toContain(`${payload} title ${index}`);
       expect(text, `hostile-${index}`).toContain(`${payload} material`);
+      const svgPath = path.join(dist, 'correlations', `hostile-${index}`, 'plot.svg');
+      if (existsSync(svgPath)) expect(textOf(parse(await readFile(svgPath, 'utf8')) as unknown as Node), `hostile-${index} plot.svg`).toContain(`${payload} property`);
       const catalogue = textOf(parse(await readFile(path.join(dist, 'index.html'), 'utf8')) as unknown as Node);
       expect(catalogue).toContain(`${payload} title ${index}`);
     }
