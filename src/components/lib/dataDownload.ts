@@ -5,12 +5,13 @@
  * return) are quoted and prefixed with an apostrophe, common practice for CSV exports.
  */
 import { cautionsFor } from '../../core/index.ts';
+import { spreadsheetSafeText } from '../../export/index.ts';
 import { dataRows } from './dataRows.ts';
 import { INVENTED_NOTICE, unitSuffix, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
 
 /** Quote a CSV field when it needs it (RFC 4180); neutralise a leading formula character in text. */
 function textField(text: string): string {
-  const safe = /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+  const safe = spreadsheetSafeText(text);
   return /[",\r\n']/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
@@ -18,8 +19,9 @@ function numberField(value: number | undefined): string {
   return value === undefined || !Number.isFinite(value) ? '' : String(value);
 }
 
+/** A `#` comment line; a spreadsheet still splits it at commas, so each piece is made spreadsheet-safe. */
 function comment(text: string): string {
-  return `# ${text.replace(/\s*[\r\n]+\s*/g, ' ')}`;
+  return `# ${text.replace(/\s*[\r\n]+\s*/g, ' ').split(',').map(spreadsheetSafeText).join(',')}`;
 }
 
 /**
