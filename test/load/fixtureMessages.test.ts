@@ -151,6 +151,9 @@ const CASES: [string, string[]][] = [
   ['settings-misnamed', [
     "handbook.yml: warning: is not read; handbook settings are read from 'handbook.yaml'; rename it to handbook.yaml",
   ]],
+  ['reciprocal-across-zero', [
+    "liquid-a/correlation.yaml:25:8: fit.transform.x is 'reciprocal' but the x range -40 to 100 contains x = 0, where 1/x is infinite; fit x without a transform, or split the data at the singular point",
+  ]],
   ['reciprocal-zero', [
     "liquid-a/data.csv:2:1: x = 0 has no reciprocal, but fit.transform.x is 'reciprocal'; leave the row out with fit.exclude, or choose another transform",
   ]],

@@ -6,15 +6,20 @@
  * fixture) and a handbook settings file of its own (title, organisation, address, base path, notice): so adding a
  * correlation to content/ keeps these checks green, and the settings are shown to reach the built site.
  *
- * Expected coefficients come from calling fitPolynomial on the same points and options here, independently of the
- * site, and must match the downloads to the last bit: JSON numbers and CSV fields are shortest round-trip text.
+ * Expected coefficients come from an independent exact computation: Python's fractions module solves the normal
+ * equations of the same points (the inputs as the decimals JavaScript prints for them, the certifier's convention)
+ * by plain Gauss–Jordan elimination, and the nearest doubles must match the downloads to the last bit (JSON numbers
+ * and CSV fields are shortest round-trip text). The printed check values are recomputed in Python from the printed
+ * decimals.
  */
+import { execFileSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { cp, mkdir, mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CAUTIONS, cautionsFor, fitPolynomial, type PolynomialFit } from '../../src/core/index.ts';
+import { CAUTIONS, cautionsFor, fittedSpaceWeights, forwardX, forwardY } from '../../src/core/index.ts';
+import { pythonExactLeastSquares } from '../helpers/pythonExact.ts';
 import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
 import { serveDirectory } from './staticServer.ts';
@@ -74,24 +79,45 @@ function unitSuffix(unit: string): string {
   return unit === '1' ? '' : ` ${unit}`;
 }
 
-/** The fit computed here from the loaded points, with the order the site published. */
-function expectedFit(correlation: LoadedCorrelation, order: number): PolynomialFit {
+/** Exact least squares in Python for the loaded points and options, with the order the site published. */
+const pythonCache = new Map<string, number[]>();
+function pythonCoefficients(correlation: LoadedCorrelation, order: number): number[] {
+  const key = `${correlation.slug}:${order}`;
+  if (!pythonCache.has(key)) pythonCache.set(key, solveInPython(correlation, order));
+  return pythonCache.get(key)!;
+}
+
+function solveInPython(correlation: LoadedCorrelation, order: number): number[] {
   const settings = correlation.meta.fit;
-  return fitPolynomial(
+  const x = correlation.used.map((point) => point.x);
+  const y = correlation.used.map((point) => point.y);
+  const weights = settings.weights === 'uncertainty' ? fittedSpaceWeights(y, correlation.used.map((point) => point.uncertainty ?? NaN), settings.transform.y) : undefined;
+  const [solution] = pythonExactLeastSquares([
     {
-      x: correlation.used.map((point) => point.x),
-      y: correlation.used.map((point) => point.y),
-      uncertainty: settings.weights === 'uncertainty' ? correlation.used.map((point) => point.uncertainty ?? NaN) : undefined,
-    },
-    {
+      u: x.map((value) => String(forwardX(settings.transform.x, value))),
+      v: y.map((value) => String(forwardY(settings.transform.y, value))),
+      ...(weights ? { w: weights.map(String) } : {}),
       order,
       intercept: settings.intercept,
-      transformX: settings.transform.x,
-      transformY: settings.transform.y,
-      constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
-      range: correlation.range,
+      constraints: settings.passThrough.map((point) => [String(forwardX(settings.transform.x, point.x)), String(forwardY(settings.transform.y, point.y))] as const),
     },
-  );
+  ]);
+  return solution!.nearest;
+}
+
+/** y of the printed equation at x, evaluated by Python from the printed decimals (exact for the polynomial part). */
+function pythonPrintedValues(printed: readonly string[], transformX: string, transformY: string, xs: readonly number[]): number[] {
+  const script = `
+import json, math, sys
+from fractions import Fraction as F
+a = [F(t) for t in ${JSON.stringify(printed)}]
+out = []
+for x in ${JSON.stringify(xs.map(String))}:
+    u = 1 / F(x) if "${transformX}" == "reciprocal" else (F(repr(math.log(float(x)))) if "${transformX}" == "log" else F(x))
+    v = sum(c * u ** k for k, c in enumerate(a))
+    out.append(math.exp(float(v)) if "${transformY}" == "log" else float(v))
+print(json.dumps(out))`;
+  return JSON.parse(execFileSync('python3', ['-c', script], { encoding: 'utf8' })) as number[];
 }
 
 function page(slug: string): Promise<string> {
@@ -248,7 +274,7 @@ describe('astro build of the demo handbook', () => {
     expect(html).not.toContain('<code>F = [');
   });
 
-  it('coefficients.json: cautions, range, notice, and coefficients equal to fitPolynomial to the last bit', async () => {
+  it('coefficients.json: cautions, range, notice, coefficients equal to an exact Python solve to the last bit, printed check values from the printed decimals', async () => {
     for (const correlation of correlations) {
       const text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8');
       const json = JSON.parse(text);
@@ -260,13 +286,15 @@ describe('astro build of the demo handbook', () => {
       if (correlation.meta.invented) expect(json.notice).toMatch(/^Invented data: /);
       // The published order is the one the loader chose.
       expect(json.order).toBe(fitDataset(correlation).fit?.order);
-      const fit = expectedFit(correlation, json.order);
+      const expected = pythonCoefficients(correlation, json.order);
       const published = json.coefficients as number[];
-      expect(published.length).toBe(fit.coefficients.length);
-      published.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}: ${value} vs ${fit.coefficients[k]}`).toBe(true));
-      expect(json.mapped.coefficients).toEqual(fit.mapped.coefficients);
-      expect(json.checkValues).toEqual(fit.checkValues);
-      expect(json.significantDigits).toEqual(fit.significantDigits);
+      expect(published.length).toBe(expected.length);
+      published.forEach((value, k) => expect(Object.is(value, expected[k]), `${correlation.slug} a${k}: ${value} vs ${expected[k]}`).toBe(true));
+      const checks = json.printedCheckValues as { x: number; y: string; tolerance: number }[];
+      expect(checks.length).toBe(7);
+      const python = pythonPrintedValues(json.printedCoefficients, json.transforms.x, json.transforms.y, checks.map((check) => check.x));
+      checks.forEach((check, i) => expect(Math.abs(python[i]! - Number(check.y)), `${correlation.slug} printed check at x = ${check.x}`).toBeLessThanOrEqual(check.tolerance));
+      expect(json.mapped.center.toString().length).toBeLessThanOrEqual(10);
       expect(typeof json.equation).toBe('string');
       expect(json.provenance.source.citation).toBe(correlation.meta.source.citation);
     }
@@ -284,10 +312,10 @@ describe('astro build of the demo handbook', () => {
       expect(comments.some((line) => line.startsWith('# INVENTED DATA:'))).toBe(correlation.meta.invented);
       expect(table[0]).toBe('k,coefficient,significant_digits,rounded,standard_error,ci95_low,ci95_high');
       const json = JSON.parse(await readFile(path.join(outDir, 'correlations', correlation.slug, 'coefficients.json'), 'utf8'));
-      const fit = expectedFit(correlation, json.order);
+      const expected = pythonCoefficients(correlation, json.order);
       const values = table.slice(1).map((line) => Number(line.split(',')[1]));
-      expect(values.length).toBe(fit.coefficients.length);
-      values.forEach((value, k) => expect(Object.is(value, fit.coefficients[k]), `${correlation.slug} a${k}`).toBe(true));
+      expect(values.length).toBe(expected.length);
+      values.forEach((value, k) => expect(Object.is(value, expected[k]), `${correlation.slug} a${k}`).toBe(true));
     }
   });
 });

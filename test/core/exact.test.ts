@@ -1,0 +1,130 @@
+/**
+ * The exact arithmetic of src/core/exact: decimal reading, rational helpers, conversion to double, fraction-free
+ * elimination and the exact least-squares solve, against values worked by hand and against a second exact
+ * implementation (Python's fractions module, run from the test; test/helpers/pythonExact.ts).
+ */
+import { describe, expect, it } from 'vitest';
+import {
+  add,
+  compare,
+  decimalParts,
+  decimalRational,
+  evaluateExact,
+  exactLeastSquares,
+  fromDouble,
+  multiply,
+  parseDecimal,
+  rational,
+  reduce,
+  scaleToIntegers,
+  solveExact,
+  subtract,
+  toNumber,
+  type Rational,
+} from '../../src/core/index.ts';
+import { pythonExactLeastSquares, pythonFractions } from '../helpers/pythonExact.ts';
+
+const text = (value: Rational) => {
+  const r = reduce(value);
+  return `${r.num}/${r.den}`;
+};
+
+describe('decimal reading', () => {
+  it('decimalParts reads the decimal a double prints as (computed by hand)', () => {
+    expect(decimalParts(-12.5)).toEqual({ digits: -125n, exponent: -1 });
+    expect(decimalParts(1e-7)).toEqual({ digits: 1n, exponent: -7 });
+    expect(decimalParts(2.5e21)).toEqual({ digits: 25n, exponent: 20 });
+    expect(decimalParts(0.1)).toEqual({ digits: 1n, exponent: -1 });
+  });
+
+  it('scaleToIntegers brings values to one exponent (computed by hand)', () => {
+    expect(scaleToIntegers([1.5, 20, -0.25])).toEqual({ ints: [150n, 2000n, -25n], exponent: -2 });
+  });
+
+  it('decimalRational and parseDecimal give the written value exactly, not the binary one', () => {
+    expect(text(decimalRational(0.1))).toBe('1/10');
+    expect(text(parseDecimal('-2422.701'))).toBe('-2422701/1000');
+    expect(text(parseDecimal('5e-4'))).toBe('1/2000');
+    expect(text(parseDecimal('-1.4674896e+3'))).toBe('-917181/625'); // −14674896/10000 in lowest terms (by hand)
+    expect(() => parseDecimal('Infinity')).toThrow(/cannot read/);
+    // The binary value of 0.1 is not 1/10: fromDouble keeps it (IEEE 754: 0.1 = 3602879701896397 / 2^55).
+    expect(text(fromDouble(0.1))).toBe('3602879701896397/36028797018963968');
+  });
+});
+
+describe('rational helpers', () => {
+  it('add, subtract, multiply, reduce and compare agree with Python fractions', () => {
+    const a = rational(7n, 12n);
+    const b = rational(-5n, 18n);
+    const ours = [text(add(a, b)), text(subtract(a, b)), text(multiply(a, b))];
+    const python = pythonFractions('" ".join(str(x) for x in [F(7,12)+F(-5,18), F(7,12)-F(-5,18), F(7,12)*F(-5,18)])').split(' ');
+    expect(ours.map((t) => t.replace(/\/1$/, ''))).toEqual(python);
+    expect(compare(a, b)).toBe(1);
+    expect(compare(b, a)).toBe(-1);
+    expect(compare(rational(2n, 4n), rational(1n, 2n))).toBe(0);
+  });
+
+  it('toNumber rounds to the nearest double, like Python float(Fraction)', () => {
+    const cases: [bigint, bigint][] = [[1n, 3n], [-2n, 7n], [10n ** 30n + 1n, 3n], [1n, 10n ** 320n], [123456789012345678901234567890n, 987654321n]];
+    const python = JSON.parse(pythonFractions(`__import__("json").dumps([float(F(${cases.map(([n, d]) => `${n},${d}`).join(')), float(F(')}))])`)) as number[];
+    cases.forEach(([n, d], i) => expect(toNumber(rational(n, d))).toBe(python[i]));
+  });
+
+  it('evaluateExact applies Horner in rationals: 1 + 2u + 3u² at u = 1/2 is 11/4 (computed by hand)', () => {
+    expect(text(evaluateExact([rational(1n), rational(2n), rational(3n)], rational(1n, 2n)))).toBe('11/4');
+  });
+});
+
+describe('solveExact (fraction-free elimination)', () => {
+  it('solveExact solves a 3×3 system exactly (worked by hand: x = 1, y = −2, z = 3; det K = −5)', () => {
+    // 2x + y − z = −3, x + 3y + 2z = 1, −x + y + z = 0 → x = 1, y = −2, z = 3 (substitution by hand).
+    const K = [[2n, 1n, -1n], [1n, 3n, 2n], [-1n, 1n, 1n]];
+    const { denominator, numerators } = solveExact(K, [[-3n], [1n], [0n]]);
+    const solution = numerators.map((row) => text(rational(row[0]!, denominator)));
+    expect(solution).toEqual(['1/1', '-2/1', '3/1']);
+    // det K by cofactor expansion (by hand): 2(3·1 − 2·1) − 1(1·1 − 2·(−1)) + (−1)(1·1 − 3·(−1)) = 2 − 3 − 4 = −5;
+    // the determinant is returned up to sign.
+    expect(denominator === 5n || denominator === -5n).toBe(true);
+    const det = Number(pythonFractions('2*(3*1-2*1) - 1*(1*1-2*(-1)) + (-1)*(1*1-3*(-1))'));
+    expect(Math.abs(Number(denominator))).toBe(Math.abs(det));
+  });
+
+  it('solveExact reports a singular matrix with denominator 0', () => {
+    expect(solveExact([[1n, 2n], [2n, 4n]], [[1n], [2n]]).denominator).toBe(0n);
+  });
+
+  it('solveExact does not modify its inputs', () => {
+    const K = Object.freeze([Object.freeze([4n, 1n]), Object.freeze([1n, 3n])]);
+    const B = Object.freeze([Object.freeze([1n]), Object.freeze([2n])]);
+    expect(() => solveExact(K, B)).not.toThrow();
+  });
+});
+
+describe('exactLeastSquares against Python fractions', () => {
+  it('exactLeastSquares gives the same exact coefficients as an independent Gauss–Jordan on Fractions', () => {
+    const u = [250, 275.5, 301.25, 330, 362.75, 400.5, 441, 480.125, 520];
+    const v = [1.2345, 1.3012, 1.4103, 1.5222, 1.6501, 1.8017, 1.9632, 2.1304, 2.3111];
+    const w = [1, 4, 2.25, 1, 0.64, 1, 4, 1, 0.25];
+    const problems = [
+      { order: 3, intercept: true, weights: undefined, constraints: [] },
+      { order: 2, intercept: true, weights: w, constraints: [] },
+      { order: 3, intercept: false, weights: undefined, constraints: [] },
+      { order: 3, intercept: true, weights: w, constraints: [{ u: 300, v: 1.4 }] },
+    ];
+    const python = pythonExactLeastSquares(
+      problems.map((p) => ({
+        u: u.map(String),
+        v: v.map(String),
+        ...(p.weights ? { w: p.weights.map(String) } : {}),
+        order: p.order,
+        intercept: p.intercept,
+        constraints: p.constraints.map((c) => [String(c.u), String(c.v)] as const),
+      })),
+    );
+    problems.forEach((p, i) => {
+      const ours = exactLeastSquares({ u, v, weights: p.weights, order: p.order, intercept: p.intercept, constraints: p.constraints })!;
+      expect(ours.exactCoefficients.map(text).map((t) => t.replace(/^0\/1$/, '0/1'))).toEqual(python[i]!.exact);
+      ours.coefficients.forEach((value, k) => expect(value).toBe(python[i]!.nearest[k]));
+    });
+  });
+});
