@@ -18,6 +18,11 @@ export { fingerprint, canonicalTexts, parseFingerprint, FINGERPRINT_RECIPE, type
 export { approvalState, lapseText, LAPSE_REASON_TEXT, type Approval, type LapseReason } from './review/approvalState.ts';
 export { reviewTrail, reviewDiagnostics, type ReviewTrail } from './review/reviewTrail.ts';
 
+// history from git: commits per correlation, what changed since the approved version
+export { handbookHistory, HISTORY_VERSIONS, type CorrelationHistory, type HistoryRow, type SinceApproval } from './history/handbookHistory.ts';
+export { whatChanged, type WhatChanged, type RowChange } from './history/whatChanged.ts';
+export { gitLog, readBlobs, type GitCommit, type GitLogResult } from './history/gitLog.ts';
+
 // messages
 export { formatDiagnostic, sortDiagnostics, hasErrors, error, warning, type Diagnostic, type Position } from './diagnostic.ts';
 

@@ -9,8 +9,8 @@
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Loader, LoaderContext } from 'astro/loaders';
-import { fitHandbook, formatDiagnostic } from '../load/index.ts';
-import type { CorrelationEntry } from '../schema/index.ts';
+import { fitHandbook, formatDiagnostic, handbookHistory } from '../load/index.ts';
+import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
   /**
@@ -24,6 +24,8 @@ export interface CorrelationLoaderOptions {
 async function loadAll(context: LoaderContext, absoluteDirectory: string): Promise<void> {
   const displayDirectory = path.relative(process.cwd(), absoluteDirectory) || '.';
   const handbook = await fitHandbook(displayDirectory);
+  // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
+  const histories = await handbookHistory(displayDirectory, handbook.datasets);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
   for (const { dataset, fitted, review } of handbook.datasets) {
     const correlation = dataset.correlation;
@@ -43,6 +45,7 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
         approval: review.approval.state,
         lapseReasons: review.approval.state === 'lapsed' ? [...review.approval.reasons] : [],
       },
+      history: histories.get(correlation.slug) as StoredHistory | undefined,
     };
     entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(correlation.metadataPath)) });
   }

@@ -69,6 +69,54 @@ export const reviewTrailSchema = z
   })
   .strict();
 
+/** One commit in a correlation's history (src/load/history/handbookHistory.ts). */
+const historyRowSchema = z
+  .object({
+    commit: z.string().describe('Abbreviated commit hash'),
+    date: z.string().describe('Commit date, YYYY-MM-DD'),
+    subject: z.string().describe('Commit subject'),
+    coefficients: z.enum(['added', 'changed', 'unchanged', 'removed', 'unknown']).describe('Whether the published coefficients changed'),
+    fingerprint: z.string().nullable().describe('Fingerprint of this version, when it could be fitted'),
+  })
+  .strict();
+
+/** What changed since the approved version (src/load/history/whatChanged.ts). */
+const whatChangedSchema = z
+  .object({
+    rowsAdded: z.number(),
+    rowsRemoved: z.number(),
+    rowsChanged: z.number(),
+    rows: z.array(
+      z.object({ x: z.number(), before: z.number().optional(), after: z.number().optional(), usedBefore: z.boolean(), usedAfter: z.boolean() }).strict(),
+    ),
+    options: z.array(z.string()),
+    resultChanged: z.boolean(),
+    maxCurveChange: z
+      .object({ deltaY: z.number(), atX: z.number(), overS: z.number().nullable(), min: z.number(), max: z.number() })
+      .strict()
+      .nullable(),
+  })
+  .strict();
+
+/** The history section: git history of the correlation's folder, or why there is none. */
+export const historySchema = z.union([
+  z.object({ available: z.literal(false), reason: z.string() }).strict(),
+  z
+    .object({
+      available: z.literal(true),
+      rows: z.array(historyRowSchema),
+      older: z.number().int().nonnegative(),
+      uncommitted: z.boolean(),
+      sinceApproval: z
+        .union([
+          z.object({ found: z.literal(true), commit: z.string(), date: z.string(), changes: whatChangedSchema }).strict(),
+          z.object({ found: z.literal(false) }).strict(),
+        ])
+        .nullable(),
+    })
+    .strict(),
+]);
+
 /** The stored entry. */
 export const correlationEntrySchema = z
   .object({
@@ -92,11 +140,14 @@ export const correlationEntrySchema = z
     orderSelection: z.record(z.unknown()).nullable().describe('Order-selection result, as plain data'),
     /** Fingerprint and approval state. */
     reviewTrail: reviewTrailSchema.describe('Fingerprint and approval state'),
+    /** History of the correlation's folder from git, or why it is not available. */
+    history: historySchema.optional().describe('History from git, or why it is not available'),
   })
   .strict();
 
 export type DataPoint = z.output<typeof dataPointSchema>;
 export type ExcludedPoint = z.output<typeof excludedPointSchema>;
 export type Diagnostic = z.output<typeof diagnosticSchema>;
+export type StoredHistory = z.output<typeof historySchema>;
 export type StoredReviewTrail = z.output<typeof reviewTrailSchema>;
 export type CorrelationEntry = z.output<typeof correlationEntrySchema>;

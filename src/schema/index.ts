@@ -49,5 +49,6 @@ export {
   excludedPointSchema,
   diagnosticSchema,
   reviewTrailSchema,
+  historySchema,
 } from './correlationEntry.ts';
-export type { StoredReviewTrail, CorrelationEntry, DataPoint, ExcludedPoint, Diagnostic } from './correlationEntry.ts';
+export type { StoredHistory, StoredReviewTrail, CorrelationEntry, DataPoint, ExcludedPoint, Diagnostic } from './correlationEntry.ts';
