@@ -8,3 +8,5 @@ export { spreadsheetSafeText } from './spreadsheetSafeText.ts';
 export { INVENTED_NOTICE } from './inventedNotice.ts';
 export { finiteOrNull, jsonNumbers, type Jsonified, type JsonValue } from './jsonNumbers.ts';
 export { approvalLabel, lapseReasonsText } from './approvalLabel.ts';
+export { handbookJson, HANDBOOK_FORMAT_VERSION, HANDBOOK_JSON_FILE, HANDBOOK_SCHEMA_FILE, type HandbookCorrelation, type HandbookJsonInput } from './handbookJson.ts';
+export { HANDBOOK_SCHEMA } from './handbookSchema.ts';

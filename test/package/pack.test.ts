@@ -81,6 +81,13 @@ describe('npm pack → npm i ./correlary-<v>.tgz in an empty folder', () => {
     expect(index).toContain('href="/handbook/correlations/liquid-a/"');
     expect(existsSync(path.join(folder, 'dist', 'correlations', 'liquid-a', 'index.html'))).toBe(true);
     expect(existsSync(path.join(folder, 'dist', 'correlations', 'liquid-a', 'coefficients.json'))).toBe(true);
+    // handbook.json carries the coefficients exactly as `correlary fit data.csv --json` prints them for the same data
+    // and options (the fixture's metadata names the columns and leaves the order to the default criterion).
+    const handbook = JSON.parse(await readFile(path.join(folder, 'dist', 'handbook.json'), 'utf8'));
+    const fit = await inFolder('npx', ['--no', 'correlary', 'fit', 'content/liquid-a/data.csv', '--x', 'T', '--y', 'cp', '--json']);
+    expect(handbook.correlations[0].url).toBe('/handbook/correlations/liquid-a/');
+    expect(handbook.correlations[0].coefficients).toEqual(JSON.parse(fit.stdout).coefficients);
+    expect(existsSync(path.join(folder, 'dist', 'handbook.schema.json'))).toBe(true);
     // Nothing of Astro's own bookkeeping leaks into the published folder.
     expect((await readdir(path.join(folder, 'dist'))).filter((name) => name.endsWith('.mjs'))).toEqual([]);
   });

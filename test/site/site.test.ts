@@ -22,6 +22,7 @@ import { CAUTIONS, cautionsFor, fittedSpaceWeights, forwardX, forwardY } from '.
 import { pythonExactLeastSquares } from '../helpers/pythonExact.ts';
 import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
+import { checkHandbookJson } from './handbookJsonChecks.ts';
 import { serveDirectory } from './staticServer.ts';
 
 const CHROMIUM = '/usr/bin/chromium';
@@ -317,6 +318,15 @@ describe('astro build of the demo handbook', () => {
       expect(values.length).toBe(expected.length);
       values.forEach((value, k) => expect(Object.is(value, expected[k]), `${correlation.slug} a${k}`).toBe(true));
     }
+  });
+});
+
+describe('handbook.json', () => {
+  it('handbook.json is valid against handbook.schema.json and equals correlary fit --json for every correlation', async () => {
+    const json = await checkHandbookJson(outDir, path.join(workDir, 'content'), BASE, correlations.map((correlation) => correlation.slug));
+    expect(json.handbook.url).toBe(`${SETTINGS.url}${BASE}`);
+    expect(json.handbook.title).toBe(SETTINGS.title);
+    expect(json.cautions).toEqual(CAUTIONS);
   });
 });
 
