@@ -40,7 +40,10 @@ export function checkPoints(range: { readonly min: number; readonly max: number 
   );
 }
 
-/** u at x as an exact rational: x as written, 1/x exactly, or ln x as the decimal of its double. */
+/**
+ * u at x as an exact rational: x as written, 1/x exactly, or ln x as the decimal of its double.
+ * @example exactU('reciprocal', 250) // => { num: 1n, den: 250n }
+ */
 export function exactU(transform: TransformX, x: number): Rational {
   if (transform === 'reciprocal') return divide(rational(1n), decimalRational(x));
   if (transform === 'log') return decimalRational(Math.log(x));
@@ -73,7 +76,10 @@ function copyNoise(coefficients: readonly number[], transformX: TransformX, tran
   return transformY === 'log' ? Math.abs(y) * (noiseV + 4 * EPSILON) : noiseV;
 }
 
-/** Decimal place of the last printed digit of a coefficient's text ("13.88924" → −5, "5e-4" → −4, "145306" → 0). */
+/**
+ * Decimal place of the last printed digit of a coefficient's text ("13.88924" → −5, "5e-4" → −4, "145306" → 0).
+ * @example lastPrintedPlace('13.88924') // => -5
+ */
 export function lastPrintedPlace(text: string): number {
   const match = /^[+-]?(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/.exec(text);
   if (match === null) throw new Error(`lastPrintedPlace cannot read '${text}'`);

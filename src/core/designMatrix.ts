@@ -5,6 +5,9 @@
  */
 import { Matrix } from 'ml-matrix';
 
+/**
+ * @example designMatrix([-1, 0.5], [0, 1, 2]).to2DArray() // => [[1, -1, 1], [1, 0.5, 0.25]]
+ */
 export function designMatrix(values: readonly number[], powers: readonly number[], rowScale?: readonly number[]): Matrix {
   return new Matrix(values.map((value, i) => powers.map((k) => value ** k * (rowScale ? rowScale[i]! : 1))));
 }

@@ -17,33 +17,51 @@ export function tQuantile(probability: number, dof: number): number {
   return tQuantileImpl(probability, dof);
 }
 
-/** Two-sided tail probability P(|T| ≥ |t|) for Student's t with `dof` degrees of freedom. */
+/**
+ * Two-sided tail probability P(|T| ≥ |t|) for Student's t with `dof` degrees of freedom.
+ * @example tTwoSidedP(2.228138851986274, 10) // => 0.05
+ */
 export function tTwoSidedP(t: number, dof: number): number {
   return 2 * (1 - tCdfImpl(Math.abs(t), dof));
 }
 
-/** Quantile of the F distribution with (d1, d2) degrees of freedom. */
+/**
+ * Quantile of the F distribution with (d1, d2) degrees of freedom.
+ * @example fQuantile(0.95, 2, 10) // => 4.1028210151304
+ */
 export function fQuantile(probability: number, d1: number, d2: number): number {
   return fQuantileImpl(probability, d1, d2);
 }
 
-/** Upper-tail probability P(F ≥ f) of the F distribution with (d1, d2) degrees of freedom. */
+/**
+ * Upper-tail probability P(F ≥ f) of the F distribution with (d1, d2) degrees of freedom.
+ * @example fUpperP(4.1028210151304, 2, 10) // => 0.05
+ */
 export function fUpperP(f: number, d1: number, d2: number): number {
   if (!(f > 0)) return 1;
   return 1 - fCdfImpl(f, d1, d2);
 }
 
-/** Quantile of χ² with `dof` degrees of freedom. */
+/**
+ * Quantile of χ² with `dof` degrees of freedom.
+ * @example chiSquareQuantile(0.95, 10) // => 18.307038053275143
+ */
 export function chiSquareQuantile(probability: number, dof: number): number {
   return chiSquareQuantileImpl(probability, dof);
 }
 
-/** Upper-tail probability P(X ≥ x) of χ² with `dof` degrees of freedom. */
+/**
+ * Upper-tail probability P(X ≥ x) of χ² with `dof` degrees of freedom.
+ * @example chiSquareUpperP(18.307038053275146, 10) // => 0.05
+ */
 export function chiSquareUpperP(x: number, dof: number): number {
   return 1 - chiSquareCdfImpl(x, dof);
 }
 
-/** Quantile of the standard normal distribution. */
+/**
+ * Quantile of the standard normal distribution.
+ * @example normalQuantile(0.975) // => 1.9599639845400538
+ */
 export function normalQuantile(probability: number): number {
   return normalQuantileImpl(probability, 0, 1);
 }

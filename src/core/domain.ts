@@ -19,7 +19,10 @@ export function domainMap(values: readonly number[]): DomainMap {
   return { center: min + halfWidth, halfWidth: halfWidth > 0 ? halfWidth : 1 };
 }
 
-/** t = (u − center)/halfWidth. */
+/**
+ * t = (u − center)/halfWidth.
+ * @example toUnit({ center: 575, halfWidth: 325 }, 900) // => 1
+ */
 export function toUnit(map: DomainMap, u: number): number {
   return (u - map.center) / map.halfWidth;
 }

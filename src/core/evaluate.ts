@@ -16,7 +16,10 @@ export interface Evaluation {
   readonly extrapolated: boolean;
 }
 
-/** Powers t^0..t^m of the mapped variable at x. */
+/**
+ * Powers t^0..t^m of the mapped variable at x.
+ * @example basisAt(fit, 3) // => [1, 1, 1] for order 2 with center 1.5, halfWidth 1.5
+ */
 export function basisAt(fit: Pick<PolynomialFit, 'transformX' | 'mapped' | 'order'>, x: number): number[] {
   const t = toUnit(fit.mapped.map, forwardX(fit.transformX, x));
   const powers = [1];

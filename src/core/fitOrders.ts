@@ -16,6 +16,9 @@ export type OrderFit =
   | { readonly order: number; readonly fit: PolynomialFit; readonly refused: null }
   | { readonly order: number; readonly fit: null; readonly refused: { readonly code: string; readonly message: string } };
 
+/**
+ * @example fitOrders({ x: [0, 1, 2, 3, 4], y: [1, 3, 5, 7, 9] }, [1, 2]).map((o) => o.fit?.coefficients) // => [[1, 2], [1, 2, 0]]
+ */
 export function fitOrders(
   data: FitData,
   orders: readonly number[],

@@ -229,7 +229,11 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       residuals,
       residualsOriginal,
       leverage: solution.leverage,
-      studentized: summary.studentized,
+      // In χ² mode σ is known: the residual in units of its own standard deviation σ_i·√(1 − h_ii), no estimated s.
+      studentized:
+        uncertaintyScale === 'stated'
+          ? weightedResiduals.map((e, i) => (1 - solution.leverage[i]! > 1e-12 ? e / Math.sqrt(1 - solution.leverage[i]!) : NaN))
+          : summary.studentized,
       cooksDistance: summary.cooksDistance,
     },
     method: { solver: 'householder-qr', refinement, rank: parameters },

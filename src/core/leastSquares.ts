@@ -62,14 +62,20 @@ function constraintBasis(C: Matrix, d: readonly number[]): { Z: Matrix; particul
   return { Z, particular };
 }
 
-/** 2-norm condition number of a tall matrix, from the singular values of its R factor. */
+/**
+ * 2-norm condition number of a tall matrix, from the singular values of its R factor.
+ * @example conditionNumber(designMatrix([-1, 0, 1], [0, 1])) // => 1.2247448713915892 (√1.5)
+ */
 export function conditionNumber(matrix: Matrix): number {
   if (matrix.columns === 0) return 1;
   const R = new QrDecomposition(matrix).upperTriangularMatrix;
   return new SingularValueDecomposition(R, { computeLeftSingularVectors: false, computeRightSingularVectors: false }).condition;
 }
 
-/** Solve the (constrained) least-squares problem. Inputs are not modified. */
+/**
+ * Solve the (constrained) least-squares problem. Inputs are not modified.
+ * @example solveLeastSquares(designMatrix([-1, 0, 1], [0, 1]), [1, 2, 3]).beta // => [2, 1] (to rounding)
+ */
 export function solveLeastSquares(
   A: Matrix,
   b: readonly number[],

@@ -5,7 +5,10 @@
 import { FitError } from './fitError.ts';
 import type { TransformX, TransformY } from './types.ts';
 
-/** Apply the x transform to one value. */
+/**
+ * Apply the x transform to one value.
+ * @example forwardX('reciprocal', 250) // => 0.004
+ */
 export function forwardX(transform: TransformX, x: number): number {
   if (transform === 'reciprocal') return 1 / x;
   if (transform === 'log') return Math.log(x);
@@ -19,12 +22,18 @@ export function inverseX(transform: TransformX, u: number): number {
   return u;
 }
 
-/** Apply the y transform to one value. */
+/**
+ * Apply the y transform to one value.
+ * @example forwardY('log', Math.E) // => 1
+ */
 export function forwardY(transform: TransformY, y: number): number {
   return transform === 'log' ? Math.log(y) : y;
 }
 
-/** Undo the y transform. */
+/**
+ * Undo the y transform.
+ * @example inverseY('log', 0) // => 1
+ */
 export function inverseY(transform: TransformY, v: number): number {
   return transform === 'log' ? Math.exp(v) : v;
 }
@@ -32,6 +41,7 @@ export function inverseY(transform: TransformY, v: number): number {
 /**
  * Transform a whole data set, checking the domain of each transform.
  * @throws FitError 'log-domain' or 'reciprocal-domain' naming the first offending point
+ * @example transformData([1, 2], [1, Math.E], 'reciprocal', 'log') // => { u: [1, 0.5], v: [0, 1] }
  */
 export function transformData(
   x: readonly number[],

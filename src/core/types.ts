@@ -153,7 +153,10 @@ export interface PointDiagnostics {
   /** Residuals in the user's y units (y − ŷ). */
   readonly residualsOriginal: readonly number[];
   readonly leverage: readonly number[];
-  /** Externally studentized residuals. */
+  /**
+   * Externally studentized residuals (weighted: in units of each point's own σ, scaled by the scatter); in χ² mode
+   * (σ known) the standardized residual √w_i·r_i/√(1 − h_ii).
+   */
   readonly studentized: readonly number[];
   readonly cooksDistance: readonly number[];
 }

@@ -22,6 +22,7 @@ export interface ValidatedOptions {
 /**
  * Checks that do not depend on the order: equal lengths, finite values, positive uncertainties, x not constant.
  * @throws FitError naming the first offending point
+ * @example validateFitData({ x: [1, 1], y: [3, 4] }) // throws FitError 'constant-x'
  */
 export function validateFitData(data: FitData): void {
   const n = data.x.length;
@@ -51,6 +52,9 @@ export function validateFitData(data: FitData): void {
   }
 }
 
+/**
+ * @example validateFitInput({ x: [1, 2, 3], y: [1, 2, 4] }, { order: 1 }).range // => { min: 1, max: 3 }
+ */
 export function validateFitInput(data: FitData, options: FitOptions): ValidatedOptions {
   validateFitData(data);
   const n = data.x.length;

@@ -19,7 +19,10 @@ export interface ExactSolution {
   readonly numerators: bigint[][];
 }
 
-/** Solve K·X = B exactly. Returns denominator 0n when K is singular. Inputs are not modified. */
+/**
+ * Solve K·X = B exactly. Returns denominator 0n when K is singular. Inputs are not modified.
+ * @example solveExact([[2n, 1n], [1n, 3n]], [[3n], [5n]]) // => { denominator: 5n, numerators: [[4n], [7n]] } (x = 4/5, y = 7/5)
+ */
 export function solveExact(matrix: readonly (readonly bigint[])[], rhs: readonly (readonly bigint[])[]): ExactSolution {
   const size = matrix.length;
   const width = rhs[0]?.length ?? 0;

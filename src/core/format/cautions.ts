@@ -11,6 +11,7 @@ export const CAUTIONS: readonly string[] = [
  * The cautions for one fit, naming its range, e.g. "Valid only for 250 K ≤ T ≤ 900 K (the fitted range); …".
  * @param unit unit of the independent variable ('' for none)
  * @param variable its symbol as plain text (default 'x')
+ * @example cautionsFor({ min: 250, max: 400 }, 'K', 'T')[0] // => "Valid only for 250 K ≤ T ≤ 400 K (the fitted range); outside it …"
  */
 export function cautionsFor(range: { readonly min: number; readonly max: number }, unit = '', variable = 'x'): string[] {
   const suffix = unit ? ` ${unit}` : '';

@@ -24,7 +24,10 @@ function texNumber(text: string): string {
   return match ? `${match[1]}\\times10^{${Number(match[2])}}` : text;
 }
 
-/** TeX of v = Σ a_k u^k, e.g. "c_p = 1.23 + 4.5\\times10^{-3}\\,T". */
+/**
+ * TeX of v = Σ a_k u^k, e.g. "c_p = 1.23 + 4.5\\times10^{-3}\\,T".
+ * @example equationTex(fit, { x: 'T', y: 'p' }) // => "p = 1.5 - 0.25\\,(1/T)" for a₀ = 1.5, a₁ = −0.25 in u = 1/T
+ */
 export function equationTex(fit: PolynomialFit, symbols: EquationSymbols): string {
   const u = variableFactor(fit, symbols.x, 'tex');
   const lhs = transformedYText(fit.transformY, symbols.y, 'tex');
@@ -39,7 +42,10 @@ export function equationTex(fit: PolynomialFit, symbols: EquationSymbols): strin
   return `${lhs} = ${terms.join('')}`;
 }
 
-/** Plain-text equation for terminals, e.g. "y = 1.23 + 4.5e-3*x - 6.7e-6*x^2". */
+/**
+ * Plain-text equation for terminals, e.g. "y = 1.23 + 4.5e-3*x - 6.7e-6*x^2".
+ * @example equationPlain(fit, { x: 'T', y: 'p' }) // => "ln(p) = 1.5 - 0.25*T" for a₀ = 1.5, a₁ = −0.25 under ln y
+ */
 export function equationPlain(fit: PolynomialFit, symbols: EquationSymbols): string {
   const u = variableFactor(fit, symbols.x, 'plain');
   const lhs = transformedYText(fit.transformY, symbols.y, 'plain');

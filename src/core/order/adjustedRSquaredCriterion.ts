@@ -13,7 +13,10 @@
 import { argminOrder } from './argminOrder.ts';
 import { fitOfOrder, residualVarianceOf, type CandidateTable, type OrderCriterion } from './criterion.ts';
 
-/** Adjusted R² of one fitted order (NaN without residual degrees of freedom or with S_t = 0). */
+/**
+ * Adjusted R² of one fitted order (NaN without residual degrees of freedom or with S_t = 0).
+ * @example adjustedRSquaredOf(table, table.fits[1]) // => 1 − (S_r/(n − p))/(S_t/(n − 1)) of that order
+ */
 export function adjustedRSquaredOf(table: CandidateTable, order: number): number {
   const totalDof = table.intercept ? table.n - 1 : table.n;
   if (!(table.totalSumOfSquares > 0)) return Number.NaN;

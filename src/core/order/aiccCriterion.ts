@@ -17,7 +17,10 @@
 import { argminOrder } from './argminOrder.ts';
 import { fitOfOrder, reasonNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
 
-/** AICc of one fit (NaN when n − p − 2 ≤ 0). */
+/**
+ * AICc of one fit (NaN when n − p − 2 ≤ 0).
+ * @example aiccOf({ residualSumOfSquares: 8, n: 8, parameters: 2, … }) // => 8·ln(1) + 8·10/4 = 20
+ */
 export function aiccOf(n: number, fit: OrderSummary): number {
   const denominator = n - fit.parameters - 2;
   if (denominator <= 0) return Number.NaN;

@@ -13,7 +13,10 @@
 import { argminOrder } from './argminOrder.ts';
 import { fitOfOrder, reasonNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
 
-/** BIC of one fit. */
+/**
+ * BIC of one fit.
+ * @example bicOf({ residualSumOfSquares: 8, n: 8, parameters: 2, … }) // => 8·ln(1) + 2·ln 8 = 4.1588830833596715
+ */
 export function bicOf(n: number, fit: OrderSummary): number {
   return n * Math.log(fit.residualSumOfSquares / n) + fit.parameters * Math.log(n);
 }

@@ -15,6 +15,9 @@ export interface CandidateRange {
   readonly uncertaintyGiven: boolean;
 }
 
+/**
+ * @example candidateTable(fitNestedOrders(u, v, { maxOrder: 4 }), { maxCandidate: 4, uncertaintyGiven: false }).fits.length // => 5
+ */
 export function candidateTable(nested: NestedFits, range: CandidateRange): CandidateTable {
   const fits: OrderSummary[] = nested.fits.map((fit) => ({
     order: fit.order,

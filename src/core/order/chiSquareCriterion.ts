@@ -25,7 +25,10 @@ export const CHI_SQUARE_LEVEL = 0.95;
 
 const quantileCache = new Map<number, number>();
 
-/** χ²_{0.95}(dof), cached. */
+/**
+ * χ²_{0.95}(dof), cached.
+ * @example chiSquareBound(10) // => 18.307038053275143 (χ²₀.₉₅ with 10 dof)
+ */
 export function chiSquareBound(dof: number): number {
   let value = quantileCache.get(dof);
   if (value === undefined) {
@@ -43,7 +46,10 @@ function guardedMaximum(table: CandidateTable, minResidualDof: number): number {
   return table.minCandidate;
 }
 
-/** The lowest candidate order (keeping `minResidualDof` residual dof) passing the χ² test, or null when none does. */
+/**
+ * The lowest candidate order (keeping `minResidualDof` residual dof) passing the χ² test, or null when none does.
+ * @example lowestConsistentOrder(table) // => 2 when order 2 is the lowest whose χ² is within the bound
+ */
 export function lowestConsistentOrder(table: CandidateTable, minResidualDof = 2): number | null {
   const highest = guardedMaximum(table, minResidualDof);
   for (let order = table.minCandidate; order <= highest; order++) {

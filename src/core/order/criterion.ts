@@ -75,7 +75,10 @@ export function fitOfOrder(table: CandidateTable, order: number): OrderSummary {
   return fit;
 }
 
-/** Residual variance s² = S_r / (n − p); NaN with no residual degrees of freedom. */
+/**
+ * Residual variance s² = S_r / (n − p); NaN with no residual degrees of freedom.
+ * @example residualVarianceOf({ residualSumOfSquares: 6, degreesOfFreedom: 3, … }) // => 2
+ */
 export function residualVarianceOf(fit: OrderSummary): number {
   return fit.degreesOfFreedom > 0 ? fit.residualSumOfSquares / fit.degreesOfFreedom : Number.NaN;
 }
@@ -87,7 +90,10 @@ export function reasonNumber(value: number): string {
 
 export { formatP };
 
-/** "p = 0.38" or "p < 0.0001", for reason sentences. */
+/**
+ * "p = 0.38" or "p < 0.0001", for reason sentences.
+ * @example pText(0.38123) // => "p = 0.38"
+ */
 export function pText(p: number): string {
   return p < 1e-4 ? 'p < 0.0001' : `p = ${formatP(p)}`;
 }

@@ -26,6 +26,7 @@ export interface ExtraSumOfSquaresTest {
  * extraSumOfSquaresF({ order: 1, parameters: 2, degreesOfFreedom: 8, residualSumOfSquares: 10, press: 0 },
  *                    { order: 2, parameters: 3, degreesOfFreedom: 7, residualSumOfSquares: 7, press: 0 })
  * // => { statistic: 3, numeratorDof: 1, denominatorDof: 7 }   since (10 − 7)/1 ÷ (7/7) = 3
+ * @example extraSumOfSquaresF(order1, order2).statistic // => ((S_r1 − S_r2)/(p2 − p1)) / (S_r2/(n − p2))
  */
 export function extraSumOfSquaresF(lower: OrderSummary, higher: OrderSummary): ExtraSumOfSquaresTest {
   const numeratorDof = higher.parameters - lower.parameters;
@@ -36,7 +37,10 @@ export function extraSumOfSquaresF(lower: OrderSummary, higher: OrderSummary): E
   return { statistic, numeratorDof, denominatorDof };
 }
 
-/** Upper-tail p-value of an extra-sum-of-squares test. */
+/**
+ * Upper-tail p-value of an extra-sum-of-squares test.
+ * @example extraSumOfSquaresP({ statistic: 4.1028210151304, numeratorDof: 2, denominatorDof: 10, … }) // => 0.05
+ */
 export function extraSumOfSquaresP(test: ExtraSumOfSquaresTest): number {
   if (test.denominatorDof <= 0) return Number.NaN;
   return fUpperP(test.statistic, test.numeratorDof, test.denominatorDof);
@@ -48,6 +52,7 @@ const criticalValueCache = new Map<string, number>();
  * Critical value F_{1−α}(d1, d2), cached because selection runs the same few (α, d1, d2) many times.
  * @example
  * fCriticalValue(0.05, 1, 10) // => 4.9646 (printed F tables give 4.96)
+ * @example fCriticalValue(0.05, 2, 10) // => 4.1028210151304
  */
 export function fCriticalValue(alpha: number, numeratorDof: number, denominatorDof: number): number {
   const key = `${alpha}|${numeratorDof}|${denominatorDof}`;
@@ -59,7 +64,10 @@ export function fCriticalValue(alpha: number, numeratorDof: number, denominatorD
   return value;
 }
 
-/** True when the test rejects "no improvement" at level α. */
+/**
+ * True when the test rejects "no improvement" at level α.
+ * @example isSignificant(test, 0.05) // => true when F exceeds F₀.₉₅(ν₁, ν₂)
+ */
 export function isSignificant(test: ExtraSumOfSquaresTest, alpha: number): boolean {
   if (test.denominatorDof <= 0 || test.numeratorDof <= 0) return false;
   return test.statistic > fCriticalValue(alpha, test.numeratorDof, test.denominatorDof);

@@ -18,6 +18,9 @@
 import { fitOfOrder, type CandidateTable } from './criterion.ts';
 import { lowestJustifiedCriterion } from './lowestJustifiedCriterion.ts';
 
+/**
+ * @example isFlat(candidateTable(fitNestedOrders([1, 2, 3, 4, 5, 6], [2, 2.1, 1.9, 2, 2.05, 1.95], { maxOrder: 3 }), { maxCandidate: 3, uncertaintyGiven: false })) // => true
+ */
 export function isFlat(table: CandidateTable): boolean {
   if (!table.intercept || table.fits[0]?.order !== 0) return false;
   let testable = false;

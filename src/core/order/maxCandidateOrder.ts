@@ -15,6 +15,9 @@
  */
 export const DEFAULT_MAX_ORDER = 10;
 
+/**
+ * @example maxCandidateOrder(8, 8, 10) // => 6
+ */
 export function maxCandidateOrder(n: number, distinctCount: number, maxOrder: number = DEFAULT_MAX_ORDER): number {
   return Math.min(maxOrder, n - 2, distinctCount - 1);
 }

@@ -50,6 +50,7 @@ function finiteOrNull(value: number): number | null {
 /**
  * Build the order table from nested fits.
  * @param candidate which orders an automatic criterion may choose
+ * @example orderRows(nested, (order) => order >= 1).map((row) => row.order) // => [0, 1, 2, …]
  */
 export function orderRows(nested: NestedFits, candidate: (order: number) => boolean): OrderRow[] {
   const n = nested.n;

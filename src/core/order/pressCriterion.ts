@@ -15,7 +15,10 @@
 import { argminOrder } from './argminOrder.ts';
 import { fitOfOrder, reasonNumber, type CandidateTable, type OrderCriterion, type OrderSummary } from './criterion.ts';
 
-/** Leave-one-out RMSE √(PRESS/n). */
+/**
+ * Leave-one-out RMSE √(PRESS/n).
+ * @example looRmseOf({ press: 8, n: 8, … }) // => 1
+ */
 export function looRmseOf(n: number, fit: OrderSummary): number {
   return Math.sqrt(fit.press / n);
 }

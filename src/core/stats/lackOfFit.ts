@@ -9,7 +9,10 @@
 import { fUpperP } from '../distributions.ts';
 import type { LackOfFitTest } from '../types.ts';
 
-/** The test, or null when no x repeats or no lack-of-fit degrees of freedom remain. */
+/**
+ * The test, or null when no x repeats or no lack-of-fit degrees of freedom remain.
+ * @example lackOfFit([1, 1, 2, 2, 3, 3], [1, 1.2, 2.1, 1.9, 3.2, 2.8], [1, 1, 1, 1, 1, 1], 0.1, 2)?.pureErrorDof // => 3
+ */
 export function lackOfFit(
   u: readonly number[],
   v: readonly number[],

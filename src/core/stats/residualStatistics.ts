@@ -29,7 +29,10 @@ export interface ResidualSummary {
   readonly cooksDistance: number[];
 }
 
-/** Weighted total sum of squares, centred or not. */
+/**
+ * Weighted total sum of squares, centred or not.
+ * @example totalSumOfSquares([1, 2, 3], [1, 1, 1], true) // => 2
+ */
 export function totalSumOfSquares(v: readonly number[], weights: readonly number[], centred: boolean): number {
   let sumW = 0;
   let mean = 0;
@@ -43,7 +46,10 @@ export function totalSumOfSquares(v: readonly number[], weights: readonly number
   return total;
 }
 
-/** All residual summaries. `weighted` are e_i = √w_i·r_i. */
+/**
+ * All residual summaries. `weighted` are e_i = √w_i·r_i.
+ * @example residualStatistics([1, -1, 1, -1], [0.5, 0.5, 0.5, 0.5], 2, 10, true).residualVariance // => 2
+ */
 export function residualStatistics(
   weighted: readonly number[],
   leverage: readonly number[],
