@@ -59,6 +59,25 @@ export function mappedFromPowerExact(coefficients: readonly Rational[], map: Dom
   const c = decimalRational(map.center);
   const h = decimalRational(map.halfWidth);
   const size = coefficients.length;
+  const m = size - 1;
+  const denominator = coefficients[0]?.den ?? 1n;
+  if (coefficients.every((a) => a.den === denominator)) {
+    // Integers only: b_j = Σ_k N_k·C(k,j)·cn^(k−j)·cd^(m−k)·hn^j / (D·cd^(m−j)·hd^j), with a_k = N_k/D.
+    const cdPowers = [1n];
+    const cnPowers = [1n];
+    for (let i = 1; i <= m; i++) {
+      cdPowers.push(cdPowers[i - 1]! * c.den);
+      cnPowers.push(cnPowers[i - 1]! * c.num);
+    }
+    return Array.from({ length: size }, (_, j) => {
+      let sum = 0n;
+      for (let k = j; k <= m; k++) {
+        const numerator = coefficients[k]!.num;
+        if (numerator !== 0n) sum += numerator * binomial(k, j) * cnPowers[k - j]! * cdPowers[m - k]!;
+      }
+      return rational(sum * h.num ** BigInt(j), denominator * cdPowers[m - j]! * h.den ** BigInt(j));
+    });
+  }
   const matrix = Array.from({ length: size }, (_, j) =>
     Array.from({ length: size }, (_, k) => (k < j ? rational(0n) : multiply(rational(binomial(k, j)), multiply(power(c, k - j), power(h, j))))),
   );

@@ -39,7 +39,7 @@ export interface ExactProblem {
 export interface ExactResult {
   /** Power-basis coefficients a_0..a_m in u (a_0 = 0 without intercept), nearest doubles to the exact values. */
   readonly coefficients: number[];
-  /** The same coefficients exactly, as rationals: every published form is derived from these. */
+  /** The same coefficients exactly, as rationals over one common denominator: every published form comes from these. */
   readonly exactCoefficients: Rational[];
   /** Covariance s²·P of a_0..a_m (zero row/column for a fixed a_0). */
   readonly covariance: number[][];
@@ -143,12 +143,16 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
 
   // a_k = β_k · 10^(ev − k·eu); Cov(a_j, a_k) = s²·P_jk · 10^(−(j+k)·eu) · 10^(−ew) (P is in the W-scaled system).
   const coefficients = new Array(order + 1).fill(0);
-  const exactCoefficients: Rational[] = Array.from({ length: order + 1 }, () => rational(0n));
+  // a_k = β_k·10^(ev − k·eu)/det, all over one common denominator det·10^(−lowest exponent), so that evaluation and
+  // change of basis can work on integers (see evaluateExact and convertBasis).
+  const lowestExponent = Math.min(0, ...powers.map((k) => ev - k * eu));
+  const commonDenominator = det * 10n ** BigInt(-lowestExponent);
+  const exactCoefficients: Rational[] = Array.from({ length: order + 1 }, () => rational(0n, commonDenominator));
   const covarianceFactor: Rational | null = problem.covarianceScale === 'stated' ? rational(1n) : variance;
   const covariance: number[][] = Array.from({ length: order + 1 }, () => new Array(order + 1).fill(0));
   const standardErrors = new Array(order + 1).fill(0);
   for (let j = 0; j < p; j++) {
-    exactCoefficients[powers[j]!] = timesPowerOfTen(rational(beta[j]!, det), ev - powers[j]! * eu);
+    exactCoefficients[powers[j]!] = rational(beta[j]! * 10n ** BigInt(ev - powers[j]! * eu - lowestExponent), commonDenominator);
     coefficients[powers[j]!] = toNumber(exactCoefficients[powers[j]!]!);
     for (let k = 0; k < p; k++) {
       const entry = covarianceFactor
