@@ -4,7 +4,7 @@
  * dataset and builds again, then builds a bare Astro site of N trivial pages as the baseline, and prints the
  * figures and the targets. Prints figures only; nothing here asserts a time.
  *
- * Run: npm run bench:build -- --count 1000 [--seed 1] [--keep] [--verbose]
+ * Run: npm run bench:build -- --count 1000 [--seed 1] [--keep] [--verbose] [--cpu-prof [--cpu-prof-dir DIR]]
  */
 import { readFile, readdir, rm, stat, writeFile, mkdtemp } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
@@ -26,13 +26,16 @@ const count = Number(option('count', '100'));
 const seed = Number(option('seed', '1'));
 const keep = argv.includes('--keep');
 const verbose = argv.includes('--verbose');
+/** --cpu-prof: the cold build writes a V8 CPU profile (open it in a browser's developer tools) into --cpu-prof-dir. */
+const cpuProfileDir = argv.includes('--cpu-prof') ? path.resolve(option('cpu-prof-dir', 'bench-profiles')) : undefined;
 if (!Number.isInteger(count) || count < 1) throw new Error(`bench:build requires --count to be a positive whole number; got ${option('count', '')}`);
 
 const astro = path.join(repository, 'node_modules', 'astro', 'astro.js');
 const env = { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', NODE_ENV: 'production', FORCE_COLOR: '0', NO_COLOR: '1' };
 
-function build(cwd: string): Promise<MeasuredRun> {
-  return runMeasured(process.execPath, [astro, 'build'], { cwd, env, echo: verbose });
+function build(cwd: string, profile = false): Promise<MeasuredRun> {
+  const flags = profile && cpuProfileDir ? ['--cpu-prof', `--cpu-prof-dir=${cpuProfileDir}`] : [];
+  return runMeasured(process.execPath, [...flags, astro, 'build'], { cwd, env, echo: verbose });
 }
 
 const plain = (text: string): string => text.replace(/\x1b\[[0-9;]*m/g, '');
@@ -87,7 +90,8 @@ try {
   await makeSiteProject(repository, site);
   await writeSyntheticHandbook(path.join(site, 'content'), { count, seed });
 
-  const cold = await build(site);
+  const cold = await build(site, true);
+  if (cpuProfileDir) console.log(`CPU profile of the cold build written to ${cpuProfileDir}`);
   failIfBroken(cold, 'the handbook build');
   const files = await walk(path.join(site, 'dist'));
   const pages = files.filter((item) => item.file.endsWith('.html'));
@@ -97,6 +101,15 @@ try {
   const loaded = loaderFigures(cold);
   const entrypoints = phaseSeconds(cold, /Building static entrypoints/);
   const rendering = phaseSeconds(cold, /generating static routes/);
+
+  const coldLines = [
+    `handbook build (cold):        ${s(cold.wallMs / 1000)} wall, peak memory ${gb(cold.peakRss)} (RSS of the build's process tree)`,
+    `  reading + fitting:          ${s(loaded.seconds)}${loaded.fitSeconds === undefined ? '' : ` (fitting ${s(loaded.fitSeconds)})`}`,
+    `  static entrypoints:         ${s(entrypoints)}`,
+    `  rendering pages:            ${s(rendering)}, ${pages.length} HTML pages, ${rendering ? (pages.length / rendering).toFixed(0) : 'n/a'} pages/s (${(pages.length / (cold.wallMs / 1000)).toFixed(0)} pages/s over the whole build)`,
+    `  dist/:                      ${mb(distBytes)} in ${files.length} files; largest page ${kb(largest.size)} (${path.relative(path.join(site, 'dist'), largest.file)}); shared scripts ${kb(scripts.reduce((sum, item) => sum + item.size, 0))} in ${scripts.length} file(s)`,
+  ];
+  console.log(coldLines.join('\n'));
 
   // Change one dataset (the last y of the first folder) and build again on the warm cache.
   const changed = path.join(site, 'content', 'synthetic-00000', 'data.csv');
@@ -115,11 +128,6 @@ try {
 
   const ratio = cold.wallMs / baseline.wallMs;
   const lines = [
-    `handbook build (cold):        ${s(cold.wallMs / 1000)} wall, peak memory ${gb(cold.peakRss)} (RSS of the build's process tree)`,
-    `  reading + fitting:          ${s(loaded.seconds)}${loaded.fitSeconds === undefined ? '' : ` (fitting ${s(loaded.fitSeconds)})`}`,
-    `  static entrypoints:         ${s(entrypoints)}`,
-    `  rendering pages:            ${s(rendering)}, ${pages.length} HTML pages, ${rendering ? (pages.length / rendering).toFixed(0) : 'n/a'} pages/s (${(pages.length / (cold.wallMs / 1000)).toFixed(0)} pages/s over the whole build)`,
-    `  dist/:                      ${mb(distBytes)} in ${files.length} files; largest page ${kb(largest.size)} (${path.relative(path.join(site, 'dist'), largest.file)}); shared scripts ${kb(scripts.reduce((sum, item) => sum + item.size, 0))} in ${scripts.length} file(s)`,
     `rebuild after changing 1 of ${count} datasets: ${s(rebuild.wallMs / 1000)} wall, reading + fitting ${s(reloaded.seconds)}${reloaded.fitSeconds === undefined ? '' : ` (fitting ${s(reloaded.fitSeconds)}${reloaded.cached === undefined ? '' : `, ${reloaded.cached} from the fit cache`})`}, peak memory ${gb(rebuild.peakRss)}`,
     `  rebuild fitting / cold fitting: ${loaded.fitSeconds && reloaded.fitSeconds !== undefined ? `${((100 * reloaded.fitSeconds) / loaded.fitSeconds).toFixed(1)} %` : 'n/a'}`,
     `bare Astro build of ${count} trivial pages: ${s(baseline.wallMs / 1000)} wall, peak memory ${gb(baseline.peakRss)}`,

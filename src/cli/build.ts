@@ -10,6 +10,7 @@ import { mkdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { fitHandbook, formatDiagnostic } from '../load/index.ts';
+import { fitCodeVersion } from '../load/fitCodeVersion.ts';
 import { CliError } from './cliError.ts';
 import { packageRoot } from './packageRoot.ts';
 
@@ -61,7 +62,10 @@ export async function runBuild(args: string[]): Promise<number> {
   }
 
   // The check pass: report every problem and stop before anything is written.
-  const handbook = await fitHandbook(options.content);
+  // The check pass fills the fit cache that Astro's loader then reads, so each dataset is fitted once per build.
+  const cacheDir = path.resolve('node_modules', '.cache', 'correlary');
+  const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(packageRoot()) };
+  const handbook = await fitHandbook(options.content, { fitCache });
   const errors = handbook.diagnostics.filter((diagnostic) => diagnostic.severity === 'error');
   if (errors.length > 0) {
     for (const diagnostic of handbook.diagnostics) console.error(formatDiagnostic(diagnostic));
@@ -75,7 +79,6 @@ export async function runBuild(args: string[]): Promise<number> {
   // Vite lets environment variables named like its import.meta.env keys override them; a BASE_URL left in a shell
   // or CI environment would silently replace --base in every link.
   for (const key of ['BASE_URL', 'SITE', 'ASSETS_PREFIX', 'MODE', 'DEV', 'PROD', 'SSR']) delete process.env[key];
-  const cacheDir = path.resolve('node_modules', '.cache', 'correlary');
   const { build } = await import('astro');
   // Astro 5 stages a build whose output folder lies outside the working directory in <cwd>/.astro, imports the
   // staged pages from there (so Correlary's dependencies must resolve from it) and then copies that whole folder

@@ -13,6 +13,8 @@ export interface DatasetFit {
   readonly selection: OrderSelection | undefined;
   /** Errors (the fit failed) and warnings from the order selector and the fit. */
   readonly diagnostics: readonly Diagnostic[];
+  /** Key of this result in the fit cache, when it went through one (src/load/fitCache.ts). */
+  readonly cacheKey?: string;
 }
 
 /** Turn a FitError into a message at the data line of its point, or at fit.order in the metadata. */

@@ -4,6 +4,7 @@
  * fitted is kept with `fitted` undefined so callers can say so.
  */
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
+import { fitCacheKey, readCachedFit, writeCachedFit, type FitCache } from './fitCache.ts';
 import { readHandbook } from './readHandbook.ts';
 import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
 import type { DatasetResult } from './types.ts';
@@ -23,16 +24,37 @@ export interface FittedHandbook {
   readonly diagnostics: readonly Diagnostic[];
   /** Milliseconds spent reading and validating, and fitting (for progress summaries and bench:build). */
   readonly timing: { readonly readingMs: number; readonly fittingMs: number };
+  /** How many fits came from the fit cache, when one was given. */
+  readonly cachedFits: number;
+}
+
+export interface FitHandbookOptions {
+  /** Read unchanged fits from, and write new ones to, this cache (src/load/fitCache.ts). */
+  readonly fitCache?: FitCache;
+  /** Called after each folder is read and fitted: done of total (for progress output). */
+  readonly onFitted?: (done: number, total: number) => void;
+}
+
+/** One folder's fit, from the cache when it holds the same inputs, else fitted (and then cached). */
+function fitWithCache(correlation: Parameters<typeof fitDataset>[0], cache: FitCache | undefined): { fitted: DatasetFit; cached: boolean } {
+  if (cache === undefined) return { fitted: fitDataset(correlation), cached: false };
+  const key = fitCacheKey(correlation, cache.version);
+  const hit = readCachedFit(cache.directory, key);
+  if (hit !== undefined) return { fitted: { ...hit, cacheKey: key }, cached: true };
+  const fitted = fitDataset(correlation);
+  writeCachedFit(cache.directory, key, fitted);
+  return { fitted: { ...fitted, cacheKey: key }, cached: false };
 }
 
 /** @example (await fitHandbook('content')).datasets.length // => 13 for the demo handbook */
-export async function fitHandbook(directory: string): Promise<FittedHandbook> {
+export async function fitHandbook(directory: string, options: FitHandbookOptions = {}): Promise<FittedHandbook> {
   const started = performance.now();
   const handbook = await readHandbook(directory);
   const readingMs = performance.now() - started;
   const diagnostics: Diagnostic[] = [...handbook.diagnostics];
   const datasets: FittedDataset[] = [];
   const slugs = new Set(handbook.datasets.map((read) => read.slug));
+  let cachedFits = 0;
   for (const read of handbook.datasets) {
     diagnostics.push(...read.diagnostics);
     // Errors about the folder as a whole (an invalid or duplicate slug) belong to it too: such a folder is not fitted.
@@ -40,12 +62,15 @@ export async function fitHandbook(directory: string): Promise<FittedHandbook> {
       (diagnostic) => diagnostic.severity === 'error' && (diagnostic.file === read.folder || diagnostic.file === read.metadataPath),
     );
     const dataset = folderErrors.length ? { ...read, diagnostics: [...read.diagnostics, ...folderErrors] } : read;
-    const fitted = dataset.correlation === undefined || folderErrors.length ? undefined : fitDataset(dataset.correlation);
+    const outcome = dataset.correlation === undefined || folderErrors.length ? undefined : fitWithCache(dataset.correlation, options.fitCache);
+    if (outcome?.cached) cachedFits++;
+    const fitted = outcome?.fitted;
     if (fitted) diagnostics.push(...fitted.diagnostics);
     const review = fitted === undefined || dataset.correlation === undefined ? undefined : reviewTrail(dataset.correlation, fitted.fit);
     if (review !== undefined && dataset.correlation !== undefined) diagnostics.push(...reviewDiagnostics(dataset.correlation, review, slugs));
     datasets.push({ dataset, fitted, review });
+    options.onFitted?.(datasets.length, handbook.datasets.length);
   }
   const fittingMs = performance.now() - started - readingMs;
-  return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs } };
+  return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs }, cachedFits };
 }

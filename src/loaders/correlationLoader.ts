@@ -10,6 +10,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Loader, LoaderContext } from 'astro/loaders';
 import { fitHandbook, formatDiagnostic, handbookHistory } from '../load/index.ts';
+import { fitCodeVersion } from '../load/fitCodeVersion.ts';
 import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -23,7 +24,12 @@ export interface CorrelationLoaderOptions {
 /** Read, validate and fit every correlation, then replace the collection's entries. */
 async function loadAll(context: LoaderContext, absoluteDirectory: string): Promise<void> {
   const displayDirectory = path.relative(process.cwd(), absoluteDirectory) || '.';
-  const handbook = await fitHandbook(displayDirectory);
+  // Fits are cached beside Astro's own cache; the store keeps only a reference to them (src/load/storedFit.ts).
+  const fitCache = {
+    directory: fileURLToPath(new URL('correlary-fits/', context.config.cacheDir)),
+    version: fitCodeVersion(fileURLToPath(context.config.root)),
+  };
+  const handbook = await fitHandbook(displayDirectory, { fitCache });
   // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
   const histories = await handbookHistory(displayDirectory, handbook.datasets);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
@@ -38,8 +44,8 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
       dataRange: correlation.dataRange,
       range: correlation.range,
       warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
-      fit: (fitted.fit as unknown as Record<string, unknown> | undefined) ?? null,
-      orderSelection: (fitted.selection as unknown as Record<string, unknown> | undefined) ?? null,
+      fit: fitted.fit === undefined || fitted.cacheKey === undefined ? null : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } },
+      orderSelection: fitted.selection === undefined || fitted.cacheKey === undefined ? null : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } },
       reviewTrail: {
         fingerprint: review.fingerprint?.text ?? null,
         approval: review.approval.state,
@@ -69,7 +75,7 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   const { readingMs, fittingMs } = handbook.timing;
   const seconds = (ms: number): string => (ms / 1000).toFixed(2);
   context.logger.info(
-    `loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory} in ${seconds(readingMs + fittingMs)} s (fitting ${seconds(fittingMs)} s)`,
+    `loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory} in ${seconds(readingMs + fittingMs)} s (fitting ${seconds(fittingMs)} s, ${handbook.cachedFits} from the fit cache)`,
   );
 }
 

@@ -7,18 +7,24 @@ import { plainSymbol, type PolynomialFit } from '../../core/index.ts';
 import { INVENTED_NOTICE } from '../../export/index.ts';
 import type { OrderSelection } from '../../core/index.ts';
 import type { CorrelationEntry, DataPoint } from '../../schema/index.ts';
+import { isStoredFitReference, storedFit, storedSelection } from '../../load/storedFit.ts';
 
 export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection };
 export { INVENTED_NOTICE, plainSymbol };
 
-/** The entry's fit, or null when the core refused the data. */
+/**
+ * The entry's fit, or null when the core refused the data. The content store holds a reference to the fit cache
+ * (src/load/storedFit.ts) so that it stays small; an entry holding the fit itself (tests) is read as it is.
+ */
 export function fitOf(entry: CorrelationEntry): PolynomialFit | null {
-  return entry.fit === null ? null : (entry.fit as unknown as PolynomialFit);
+  if (entry.fit === null) return null;
+  return isStoredFitReference(entry.fit) ? (storedFit(entry.fit) ?? null) : (entry.fit as unknown as PolynomialFit);
 }
 
 /** The entry's order selection, or null. */
 export function selectionOf(entry: CorrelationEntry): OrderSelection | null {
-  return entry.orderSelection === null ? null : (entry.orderSelection as unknown as OrderSelection);
+  if (entry.orderSelection === null) return null;
+  return isStoredFitReference(entry.orderSelection) ? (storedSelection(entry.orderSelection) ?? null) : (entry.orderSelection as unknown as OrderSelection);
 }
 
 /** The points used in the fit, in file order: the same order as the fit's per-point diagnostics. */

@@ -1,0 +1,98 @@
+/**
+ * On-disk fit cache: the result of fitDataset for one correlation, stored as a JSON file named by a SHA-256 key of
+ * everything the result depends on: the points used (x, y, uncertainty, data-file lines), the fit options, the
+ * validity range, the file paths and metadata positions that its messages name, and the fitting code's version
+ * (fitCodeVersion). Unchanged datasets are read back instead of refitted; a changed one gets a new key. The key
+ * never depends on time or machine, so two builds of the same content produce the same files.
+ *
+ * The same files serve the built pages: the site's content store keeps only a reference (directory and key) and
+ * pages read the fit and its order table from here (readCachedFit), which keeps Astro's store, and the JavaScript
+ * module Astro bundles it into, small.
+ *
+ * JSON has no NaN, ±Infinity or −0; they are written as {"$number": "NaN"} and restored on reading, so a cached
+ * fit equals a fresh one.
+ */
+import { createHash } from 'node:crypto';
+import { mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import type { DatasetFit } from './fitDataset.ts';
+import type { LoadedCorrelation } from './types.ts';
+
+/** Where fits are cached and under which code version. */
+export interface FitCache {
+  /** Absolute directory of the cache files (created when missing). */
+  readonly directory: string;
+  /** The fitting code's version (fitCodeVersion): a change invalidates every entry. */
+  readonly version: string;
+}
+
+const NUMBER_TAG = '$number';
+
+function replacer(_key: string, value: unknown): unknown {
+  if (typeof value === 'number' && (!Number.isFinite(value) || Object.is(value, -0))) return { [NUMBER_TAG]: Object.is(value, -0) ? '-0' : String(value) };
+  return value;
+}
+
+function reviver(_key: string, value: unknown): unknown {
+  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
+    const keys = Object.keys(value);
+    if (keys.length === 1 && keys[0] === NUMBER_TAG) return Number((value as Record<string, string>)[NUMBER_TAG]);
+  }
+  return value;
+}
+
+/** JSON text of any plain value, keeping NaN, ±Infinity and −0. @example toCacheJson([NaN]) // => '[{"$number":"NaN"}]' */
+export function toCacheJson(value: unknown): string {
+  return JSON.stringify(value, replacer);
+}
+
+/** The value back from toCacheJson's text. */
+export function fromCacheJson(text: string): unknown {
+  return JSON.parse(text, reviver);
+}
+
+/**
+ * The cache key of a correlation's fit: SHA-256 (hex) of the version and every input of fitDataset, including the
+ * positions its messages point at.
+ * @example fitCacheKey(loaded, 'v1').length // => 64
+ */
+export function fitCacheKey(correlation: LoadedCorrelation, version: string): string {
+  const inputs = {
+    version,
+    used: correlation.used.map((point) => [point.x, point.y, point.uncertainty ?? null, point.line]),
+    fit: correlation.meta.fit,
+    range: correlation.range,
+    metadataPath: correlation.metadataPath,
+    dataPath: correlation.dataPath,
+    orderPosition: correlation.orderPosition,
+  };
+  return createHash('sha256').update(toCacheJson(inputs)).digest('hex');
+}
+
+function fileOf(directory: string, key: string): string {
+  return path.join(directory, `${key}.json`);
+}
+
+/** The cached fit under `key`, or undefined when there is none (or it cannot be read). */
+export function readCachedFit(directory: string, key: string): DatasetFit | undefined {
+  let text: string;
+  try {
+    text = readFileSync(fileOf(directory, key), 'utf8');
+  } catch {
+    return undefined;
+  }
+  try {
+    return fromCacheJson(text) as DatasetFit;
+  } catch {
+    return undefined; // a damaged file is refitted and rewritten
+  }
+}
+
+/** Store a fit under `key`; written to a temporary name and renamed, so a reader never sees half a file. */
+export function writeCachedFit(directory: string, key: string, fitted: DatasetFit): void {
+  mkdirSync(directory, { recursive: true });
+  const target = fileOf(directory, key);
+  const temporary = `${target}.${process.pid}.tmp`;
+  writeFileSync(temporary, toCacheJson(fitted));
+  renameSync(temporary, target);
+}

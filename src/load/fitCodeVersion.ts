@@ -1,0 +1,43 @@
+/**
+ * The version of the fitting code, for the fit cache's keys: SHA-256 of the package version and of every source
+ * file of the numerical core and of the dataset fit (src/core/**, src/load/fitDataset.ts) under the package root,
+ * so that a changed core never serves a stale fit, even without a new version number. Where the sources are not
+ * present (a compiled install), the package version alone.
+ */
+import { createHash } from 'node:crypto';
+import { readFileSync, readdirSync } from 'node:fs';
+import path from 'node:path';
+
+function sourceFiles(folder: string): string[] {
+  let names: import('node:fs').Dirent[];
+  try {
+    names = readdirSync(folder, { withFileTypes: true });
+  } catch {
+    return [];
+  }
+  return names
+    .flatMap((item) => (item.isDirectory() ? sourceFiles(path.join(folder, item.name)) : /\.(ts|js|mjs)$/.test(item.name) ? [path.join(folder, item.name)] : []))
+    .sort();
+}
+
+/**
+ * @param packageRoot the folder holding package.json and src/
+ * @example fitCodeVersion('.').length // => 64
+ */
+export function fitCodeVersion(packageRoot: string): string {
+  const hash = createHash('sha256');
+  try {
+    hash.update(String((JSON.parse(readFileSync(path.join(packageRoot, 'package.json'), 'utf8')) as { version?: string }).version));
+  } catch {
+    hash.update('unknown');
+  }
+  const files = [...sourceFiles(path.join(packageRoot, 'src', 'core')), path.join(packageRoot, 'src', 'load', 'fitDataset.ts')];
+  for (const file of files) {
+    try {
+      hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');
+    } catch {
+      // not shipped: the package version stands for it
+    }
+  }
+  return hash.digest('hex');
+}

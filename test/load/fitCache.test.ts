@@ -1,0 +1,78 @@
+/**
+ * The fit cache: a cached result equals a fresh fitDataset of the same folder (the independent computation here is
+ * fitHandbook without a cache), a changed point, option or code version gets a new key, and non-finite numbers
+ * and −0 survive the JSON files.
+ */
+import { cp, mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { fitHandbook } from '../../src/load/index.ts';
+import { fitCacheKey, fromCacheJson, toCacheJson } from '../../src/load/fitCache.ts';
+import { fitCodeVersion } from '../../src/load/fitCodeVersion.ts';
+
+let root = '';
+beforeAll(async () => {
+  root = await mkdtemp(path.join(tmpdir(), 'correlary-fit-cache-'));
+  // Two demo folders: one weighted (χ² criterion), one with a transform.
+  for (const slug of ['brindlewick-bw3-conductivity', 'quillane-vapour-pressure']) {
+    await cp(path.join('content', slug), path.join(root, 'content', slug), { recursive: true });
+  }
+});
+afterAll(async () => {
+  if (root) await rm(root, { recursive: true, force: true });
+});
+
+/** The fits without their cache keys, for comparing with a run that had none. */
+function fitsOf(handbook: Awaited<ReturnType<typeof fitHandbook>>) {
+  return handbook.datasets.map(({ fitted }) => (fitted === undefined ? undefined : { fit: fitted.fit, selection: fitted.selection, diagnostics: fitted.diagnostics }));
+}
+
+describe('fit cache', () => {
+  it('toCacheJson/fromCacheJson keep NaN, ±Infinity and −0', () => {
+    const back = fromCacheJson(toCacheJson({ a: [NaN, Infinity, -Infinity, -0, 0, 1.5], b: { $other: 1 } })) as { a: number[] };
+    expect(back).toEqual({ a: [NaN, Infinity, -Infinity, -0, 0, 1.5], b: { $other: 1 } });
+    expect(Object.is(back.a[3], -0)).toBe(true);
+  });
+
+  it('fitHandbook with a cache: the first run fits and writes, the second reads back the same results', async () => {
+    const content = path.join(root, 'content');
+    const fitCache = { directory: path.join(root, 'cache'), version: 'test-1' };
+    const fresh = await fitHandbook(content);
+    const first = await fitHandbook(content, { fitCache });
+    const second = await fitHandbook(content, { fitCache });
+    expect(first.cachedFits).toBe(0);
+    expect(second.cachedFits).toBe(2);
+    expect(await readdir(fitCache.directory)).toHaveLength(2);
+    expect(fitsOf(first)).toEqual(fitsOf(fresh));
+    expect(fitsOf(second)).toEqual(fitsOf(fresh));
+    expect(second.diagnostics).toEqual(fresh.diagnostics);
+    expect(second.datasets.map((item) => item.review)).toEqual(fresh.datasets.map((item) => item.review));
+  });
+
+  it('fitCacheKey changes with a data value, a fit option and the code version, and only then', async () => {
+    const content = path.join(root, 'content');
+    const before = (await fitHandbook(content)).datasets[0]!.dataset.correlation!;
+    expect(fitCacheKey(before, 'v1')).toBe(fitCacheKey(before, 'v1'));
+    expect(fitCacheKey(before, 'v2')).not.toBe(fitCacheKey(before, 'v1'));
+    const changedPoint = { ...before, used: before.used.map((point, i) => (i === 0 ? { ...point, y: point.y + 1e-12 } : point)) };
+    expect(fitCacheKey(changedPoint, 'v1')).not.toBe(fitCacheKey(before, 'v1'));
+    const changedOption = { ...before, meta: { ...before.meta, fit: { ...before.meta.fit, maxOrder: 3 } } };
+    expect(fitCacheKey(changedOption, 'v1')).not.toBe(fitCacheKey(before, 'v1'));
+    // A data file edited on disk gives a new key for that folder only.
+    const csvPath = path.join(content, 'brindlewick-bw3-conductivity', 'data.csv');
+    const csv = await readFile(csvPath, 'utf8');
+    await writeFile(csvPath, csv.replace(/\n300,14\.147,/, '\n300,14.148,'));
+    const fitCache = { directory: path.join(root, 'cache-edit'), version: 'test-1' };
+    await fitHandbook(content, { fitCache });
+    await writeFile(csvPath, csv);
+    const after = await fitHandbook(content, { fitCache });
+    expect(after.cachedFits).toBe(1);
+  });
+
+  it('fitCodeVersion depends on the core sources (a 64-digit hex digest, stable between calls)', () => {
+    expect(fitCodeVersion('.')).toMatch(/^[0-9a-f]{64}$/);
+    expect(fitCodeVersion('.')).toBe(fitCodeVersion('.'));
+    expect(fitCodeVersion(root)).not.toBe(fitCodeVersion('.'));
+  });
+});
