@@ -1,11 +1,19 @@
 /**
  * correlationLoader(): the Astro adapter, driven with a minimal stand-in for Astro's LoaderContext.
  */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { LoaderContext } from 'astro/loaders';
-import { describe, expect, it, vi } from 'vitest';
+import { afterAll, describe, expect, it, vi } from 'vitest';
 import { correlationLoader } from '../../src/loaders/correlationLoader.ts';
 import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
+import { fitOf } from '../../src/components/lib/entryView.ts';
+
+/** Astro's cache folder stand-in: the loader caches fits in it and the store refers to them. */
+const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-loader-cache-'));
+afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
 
 function fakeContext() {
   const entries = new Map<string, { id: string; data: Record<string, unknown>; digest?: string | number; filePath?: string }>();
@@ -19,7 +27,7 @@ function fakeContext() {
     parseData: async ({ data }: { data: Record<string, unknown> }) => correlationEntrySchema.parse(data),
     generateDigest: (data: unknown) => JSON.stringify(data).length.toString(16),
     logger,
-    config: { root: pathToFileURL(`${process.cwd()}/`) },
+    config: { root: pathToFileURL(`${process.cwd()}/`), cacheDir: pathToFileURL(`${cacheDir}/`) },
   } as unknown as LoaderContext;
   return { context, entries, logger };
 }
@@ -33,7 +41,7 @@ describe('correlationLoader()', () => {
     const data = entry?.data as CorrelationEntry;
     expect(data.meta.title).toBe('Specific heat of test liquid A');
     expect(data.points).toHaveLength(9);
-    expect((data.fit as { order: number }).order).toBe(1);
+    expect(fitOf(data)?.order).toBe(1);
     expect(data.warnings.map((warning) => warning.line)).toEqual([10]);
     expect(logger.warn).toHaveBeenCalledTimes(1);
   });
