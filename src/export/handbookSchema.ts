@@ -87,10 +87,17 @@ const correlation = {
     downloads: {
       type: 'object',
       description: 'Kind of download → path inside the site (base path included).',
-      required: ['json', 'csv'],
+      required: ['json', 'csv', 'python', 'javascript', 'c', 'spreadsheet'],
       properties: {
         json: { type: 'string', pattern: '^/', description: 'The export record of the correlation.' },
         csv: { type: 'string', pattern: '^/', description: 'The coefficients as CSV, with the cautions as # comment lines.' },
+        data: { type: 'string', pattern: '^/', description: 'The data points with their diagnostics, as CSV.' },
+        plot: { type: 'string', pattern: '^/', description: 'The fit and residual plots as a static SVG.' },
+        python: { type: 'string', pattern: '^/', description: 'Python module (standard library only): evaluate(x), prediction_interval(x).' },
+        javascript: { type: 'string', pattern: '^/', description: 'JavaScript ES module: evaluate(x), predictionInterval(x).' },
+        typescript: { type: 'string', pattern: '^/', description: 'TypeScript declarations of the JavaScript module.' },
+        c: { type: 'string', pattern: '^/', description: 'C99 header: int <slug>_evaluate(double x, double *y), 0 inside the range.' },
+        spreadsheet: { type: 'string', pattern: '^/', description: 'One-cell spreadsheet formula with x in a cell named x_value, after # comment lines.' },
       },
       additionalProperties: { type: 'string', pattern: '^/' },
     },

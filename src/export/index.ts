@@ -10,3 +10,4 @@ export { finiteOrNull, jsonNumbers, type Jsonified, type JsonValue } from './jso
 export { approvalLabel, lapseReasonsText } from './approvalLabel.ts';
 export { handbookJson, HANDBOOK_FORMAT_VERSION, HANDBOOK_JSON_FILE, HANDBOOK_SCHEMA_FILE, type HandbookCorrelation, type HandbookJsonInput } from './handbookJson.ts';
 export { HANDBOOK_SCHEMA } from './handbookSchema.ts';
+export * from './snippets/index.ts';

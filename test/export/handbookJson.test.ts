@@ -14,7 +14,7 @@ async function fixtureInput(): Promise<HandbookJsonInput> {
     const loaded = dataset.correlation;
     if (loaded === undefined || fitted?.fit === undefined) return [];
     const record = correlationRecord({ slug: loaded.slug, meta: loaded.meta, range: loaded.range, excluded: loaded.excluded, fit: fitted.fit, selection: fitted.selection ?? null });
-    return [{ record, url: `/hb/correlations/${loaded.slug}/`, downloads: { json: `/hb/correlations/${loaded.slug}/coefficients.json`, csv: `/hb/correlations/${loaded.slug}/coefficients.csv` } }];
+    return [{ record, url: `/hb/correlations/${loaded.slug}/`, downloads: Object.fromEntries(['json', 'csv', 'python', 'javascript', 'c', 'spreadsheet'].map((kind) => [kind, `/hb/correlations/${loaded.slug}/${kind}`])) }];
   });
   return { generator: { name: 'correlary', version: '0.1.0' }, handbook: { title: 'Test', url: 'https://example.org/hb/', basePath: '/hb/' }, correlations };
 }

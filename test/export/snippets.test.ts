@@ -1,0 +1,188 @@
+/**
+ * The code snippets of every demo correlation, run for real: python3 (standard library), node, gcc (-std=c99
+ * -pedantic -Werror) and a spreadsheet formula engine (HyperFormula, which parses and evaluates spreadsheet
+ * formula syntax, with x in a named cell). Each is evaluated at the correlation's check values, whose y the
+ * export computes by exact rational evaluation of the certified coefficients (an independent reference for the
+ * snippets' double-precision Horner evaluation), and just outside the validity range, where it must refuse.
+ * The Python and JavaScript prediction intervals are compared with the core's bands() at the same x.
+ * The table of worst relative errors (language × correlation) is printed.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { HyperFormula } from 'hyperformula';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { bands, type PolynomialFit } from '../../src/core/index.ts';
+import {
+  correlationRecord,
+  cSnippet,
+  javascriptSnippet,
+  pythonSnippet,
+  snippetIdentifier,
+  snippetSource,
+  spreadsheetFormula,
+  SPREADSHEET_X_NAME,
+  type CorrelationRecord,
+} from '../../src/export/index.ts';
+import { fitHandbook } from '../../src/load/index.ts';
+
+interface Case {
+  readonly name: string;
+  readonly record: CorrelationRecord;
+  readonly fit: PolynomialFit;
+  readonly xs: number[];
+  readonly outside: [number, number];
+}
+
+const directory = mkdtempSync(path.join(tmpdir(), 'correlary-snippets-'));
+const cases: Case[] = [];
+/** language → slug → worst relative error at the check values. */
+const worst: Record<string, Record<string, number>> = {};
+
+function relative(value: number, reference: number): number {
+  return reference === 0 ? Math.abs(value) : Math.abs(value - reference) / Math.abs(reference);
+}
+
+function record(language: string, item: Case, values: readonly number[]): number {
+  const errors = item.record.checkValues.map((check, i) => relative(values[i]!, check.y!));
+  const max = Math.max(...errors);
+  (worst[language] ??= {})[item.record.slug] = max;
+  return max;
+}
+
+beforeAll(async () => {
+  const handbook = await fitHandbook('content');
+  for (const { dataset, fitted } of handbook.datasets) {
+    const loaded = dataset.correlation;
+    if (loaded === undefined || fitted?.fit === undefined) continue;
+    const fit = fitted.fit;
+    const rec = correlationRecord({ slug: loaded.slug, meta: loaded.meta, range: loaded.range, excluded: loaded.excluded, fit, selection: fitted.selection ?? null });
+    const source = snippetSource(fit, rec);
+    const name = snippetIdentifier(rec.slug);
+    writeFileSync(path.join(directory, `${name}.py`), pythonSnippet(source));
+    writeFileSync(path.join(directory, `${name}.mjs`), javascriptSnippet(source));
+    writeFileSync(path.join(directory, `${name}.h`), cSnippet(source));
+    const span = fit.range.max - fit.range.min;
+    cases.push({ name, record: rec, fit, xs: rec.checkValues.map((check) => check.x!), outside: [fit.range.min - span * 1e-9, fit.range.max + span * 1e-9] });
+  }
+});
+
+afterAll(() => {
+  const languages = Object.keys(worst);
+  if (languages.length > 0) {
+    const lines = [`correlation | ${languages.join(' | ')}`, `--- | ${languages.map(() => '---:').join(' | ')}`];
+    for (const item of cases) lines.push(`${item.record.slug} | ${languages.map((language) => (worst[language]?.[item.record.slug] ?? NaN).toExponential(1)).join(' | ')}`);
+    console.log(`worst relative error at the check values:\n${lines.join('\n')}`);
+  }
+  rmSync(directory, { recursive: true, force: true });
+});
+
+describe('code snippets of every demo correlation, run for real', () => {
+  it('the demo handbook gives snippets to test', () => {
+    expect(cases.length).toBeGreaterThanOrEqual(13);
+  });
+
+  it('every snippet carries the title, the validity range, the check values and the cautions as comments', () => {
+    for (const item of cases) {
+      for (const extension of ['py', 'mjs', 'h']) {
+        const text = readFileSync(path.join(directory, `${item.name}.${extension}`), 'utf8');
+        expect(text, `${item.name}.${extension}`).toContain(item.record.title);
+        expect(text).toContain(`${item.record.range.min} <= x <= ${item.record.range.max}`);
+        for (const check of item.record.checkValues) expect(text).toContain(`${check.x} -> ${check.y}`);
+        for (const caution of item.record.cautions) expect(text, `${item.name}.${extension}`).toContain(caution);
+      }
+    }
+  });
+
+  it('pythonSnippet: python3 reproduces the check values to 1e-12 relative, raises ValueError just outside, and gives the prediction interval of bands()', () => {
+    const driver = `import importlib.util, json, sys
+out = {}
+for name, xs, outside in json.loads(sys.argv[1]):
+    spec = importlib.util.spec_from_file_location(name, "${directory}/" + name + ".py")
+    module = importlib.util.module_from_spec(spec)
+    spec.loader.exec_module(module)
+    refused = []
+    for x in outside:
+        try:
+            module.evaluate(x)
+            refused.append(False)
+        except ValueError:
+            refused.append(True)
+    out[name] = {"y": [repr(module.evaluate(x)) for x in xs], "pi": [list(map(repr, module.prediction_interval(x))) for x in xs], "refused": refused}
+print(json.dumps(out))
+`;
+    const stdout = execFileSync('python3', ['-c', driver, JSON.stringify(cases.map((item) => [item.name, item.xs, item.outside]))], { encoding: 'utf8' });
+    const results = JSON.parse(stdout) as Record<string, { y: string[]; pi: string[][]; refused: boolean[] }>;
+    for (const item of cases) {
+      const result = results[item.name]!;
+      expect(record('Python', item, result.y.map(Number)), item.name).toBeLessThanOrEqual(1e-12);
+      expect(result.refused, item.name).toEqual([true, true]);
+      const expected = bands(item.fit, item.xs);
+      result.pi.forEach(([low, high], i) => {
+        expect(relative(Number(low), expected[i]!.predictionLow), `${item.name} PI low`).toBeLessThan(1e-9);
+        expect(relative(Number(high), expected[i]!.predictionHigh), `${item.name} PI high`).toBeLessThan(1e-9);
+      });
+    }
+  });
+
+  it('javascriptSnippet: node reproduces the check values to 1e-12 relative, throws RangeError just outside, and gives the prediction interval of bands()', () => {
+    const driver = `const out = {};
+for (const [name, xs, outside] of JSON.parse(process.argv[1])) {
+  const module = await import(${JSON.stringify(`${directory}/`)} + name + '.mjs');
+  const refused = outside.map((x) => { try { module.evaluate(x); return false; } catch (error) { return error instanceof RangeError; } });
+  out[name] = { y: xs.map((x) => module.evaluate(x)), pi: xs.map((x) => module.predictionInterval(x)), refused };
+}
+console.log(JSON.stringify(out));`;
+    const stdout = execFileSync(process.execPath, ['--input-type=module', '-e', driver, JSON.stringify(cases.map((item) => [item.name, item.xs, item.outside]))], { encoding: 'utf8' });
+    const results = JSON.parse(stdout) as Record<string, { y: number[]; pi: number[][]; refused: boolean[] }>;
+    for (const item of cases) {
+      const result = results[item.name]!;
+      expect(record('JavaScript', item, result.y), item.name).toBeLessThanOrEqual(1e-12);
+      expect(result.refused, item.name).toEqual([true, true]);
+      const expected = bands(item.fit, item.xs);
+      result.pi.forEach(([low, high], i) => {
+        expect(relative(low!, expected[i]!.predictionLow), `${item.name} PI low`).toBeLessThan(1e-9);
+        expect(relative(high!, expected[i]!.predictionHigh), `${item.name} PI high`).toBeLessThan(1e-9);
+      });
+    }
+  });
+
+  it('cSnippet: gcc -std=c99 -pedantic -Werror compiles every header; the program reproduces the check values to 1e-12 relative and returns non-zero just outside', () => {
+    const calls = cases.flatMap((item) => [
+      ...item.xs.map((x) => `  if (${item.name}_evaluate(${x}, &y) != 0) {\n    return 3;\n  }\n  printf("%s %.17g\\n", "${item.name}", y);`),
+      ...item.outside.map((x) => `  printf("%s refused %d\\n", "${item.name}", ${item.name}_evaluate(${x}, &y) != 0);`),
+    ]);
+    const program = `#include <stdio.h>\n${cases.map((item) => `#include "${item.name}.h"`).join('\n')}\nint main(void) {\n  double y = 0.0;\n${calls.join('\n')}\n  return 0;\n}\n`;
+    writeFileSync(path.join(directory, 'main.c'), program);
+    const binary = path.join(directory, 'main');
+    execFileSync('gcc', ['-std=c99', '-pedantic', '-Wall', '-Wextra', '-Werror', '-Wno-unused-function', '-Wno-unused-const-variable', '-o', binary, path.join(directory, 'main.c'), '-lm']);
+    const lines = execFileSync(binary, { encoding: 'utf8' }).trim().split('\n');
+    for (const item of cases) {
+      const mine = lines.filter((line) => line.startsWith(`${item.name} `)).map((line) => line.split(' '));
+      const values = mine.filter((parts) => parts[1] !== 'refused').map((parts) => Number(parts[1]));
+      expect(record('C', item, values), item.name).toBeLessThanOrEqual(1e-12);
+      expect(mine.filter((parts) => parts[1] === 'refused').map((parts) => parts[2]), item.name).toEqual(['1', '1']);
+    }
+  });
+
+  it('spreadsheetFormula: a formula engine evaluates the one-cell formula with x in a named cell to 1e-12 relative and returns #N/A just outside', () => {
+    // smartRounding off: the engine would otherwise round displayed results to 14 significant digits.
+    const engine = HyperFormula.buildEmpty({ licenseKey: 'gpl-v3', smartRounding: false });
+    const sheetName = engine.addSheet('Sheet1');
+    const sheet = engine.getSheetId(sheetName)!;
+    engine.addNamedExpression(SPREADSHEET_X_NAME, '=Sheet1!$A$1');
+    for (const item of cases) {
+      const formula = spreadsheetFormula(item.record);
+      const at = (x: number) => {
+        engine.setCellContents({ sheet, row: 0, col: 0 }, [[x, formula]]);
+        return engine.getCellValue({ sheet, row: 0, col: 1 });
+      };
+      const values = item.xs.map((x) => at(x));
+      expect(values.every((value) => typeof value === 'number'), `${item.name}: ${JSON.stringify(values)}`).toBe(true);
+      expect(record('spreadsheet', item, values as number[]), item.name).toBeLessThanOrEqual(1e-12);
+      for (const x of item.outside) expect((at(x) as { type?: string }).type, `${item.name} at ${x}`).toBe('NA');
+    }
+    engine.destroy();
+  });
+});
