@@ -6,12 +6,13 @@
  * Correlary package's own pages, with the content folder handed to the loader through CORRELARY_CONTENT.
  * Exit status: 0 built, 1 errors in the content or a failed build, 2 bad usage.
  */
-import { mkdir, stat } from 'node:fs/promises';
+import { mkdir, readdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import { fitCodeVersion } from '../load/fitCodeVersion.ts';
 import { CliError } from './cliError.ts';
+import { createProgress } from './progress.ts';
 import { packageRoot } from './packageRoot.ts';
 
 export const BUILD_USAGE = `usage: correlary build [--content DIR] [--out DIR] [--base PATH]
@@ -65,7 +66,10 @@ export async function runBuild(args: string[]): Promise<number> {
   // The check pass fills the fit cache that Astro's loader then reads, so each dataset is fitted once per build.
   const cacheDir = path.resolve('node_modules', '.cache', 'correlary');
   const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(packageRoot()) };
-  const handbook = await fitHandbook(options.content, { fitCache });
+  const progress = createProgress();
+  progress.update(`reading ${options.content}`);
+  const handbook = await fitHandbook(options.content, { fitCache, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
+  progress.done();
   const errors = handbook.diagnostics.filter((diagnostic) => diagnostic.severity === 'error');
   if (errors.length > 0) {
     for (const diagnostic of handbook.diagnostics) console.error(formatDiagnostic(diagnostic));
@@ -91,6 +95,14 @@ export async function runBuild(args: string[]): Promise<number> {
     await mkdir(staging, { recursive: true });
     process.chdir(staging);
   }
+  // On a terminal, count the pages written so far while Astro builds (Astro itself is kept quiet above warnings).
+  const pagesTimer = process.stderr.isTTY
+    ? setInterval(() => {
+        readdir(out, { recursive: true })
+          .then((names) => progress.update(`building the site: ${names.filter((name) => name.endsWith('.html')).length} pages written`))
+          .catch(() => progress.update('building the site'));
+      }, 1000)
+    : undefined;
   try {
     await build({
       root,
@@ -101,9 +113,12 @@ export async function runBuild(args: string[]): Promise<number> {
       cacheDir,
     });
   } finally {
+    if (pagesTimer !== undefined) clearInterval(pagesTimer);
+    progress.done();
     if (outside) process.chdir(workingDirectory);
   }
   const count = handbook.datasets.filter((dataset) => dataset.fitted?.fit !== undefined).length;
-  console.log(`built ${count} correlation${count === 1 ? '' : 's'} from ${options.content} into ${options.out}`);
+  const pages = (await readdir(out, { recursive: true })).filter((name) => name.endsWith('.html')).length;
+  console.log(`built ${count} correlation${count === 1 ? '' : 's'} from ${options.content} into ${options.out}: ${pages} pages in ${progress.elapsed()} s`);
   return 0;
 }

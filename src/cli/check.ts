@@ -7,6 +7,7 @@ import { stat } from 'node:fs/promises';
 import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import type { PolynomialFit } from '../core/index.ts';
 import { CliError } from './cliError.ts';
+import { createProgress } from './progress.ts';
 
 const USAGE = `usage: correlary check [DIR] [--strict]   (DIR defaults to content)
   --strict   warnings fail the check too (exit 1), e.g. a lapsed or unbound approval`;
@@ -41,7 +42,10 @@ export async function runCheck(args: string[]): Promise<number> {
   const info = await stat(directory).catch(() => undefined);
   if (info === undefined || !info.isDirectory()) throw new CliError(`check requires a directory; '${directory}' is not one`, 2);
 
-  const handbook = await fitHandbook(directory);
+  const progress = createProgress();
+  progress.update(`reading ${directory}`);
+  const handbook = await fitHandbook(directory, { onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
+  progress.done();
   const summaries: string[] = [];
   for (const { dataset, fitted } of handbook.datasets) {
     if (dataset.correlation === undefined || fitted === undefined) {
