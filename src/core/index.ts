@@ -34,7 +34,7 @@ export { checkPoints, exactU, fullCheckValues, lastPrintedPlace, printedForm, ty
 
 // Formatting for publication
 export { CAUTIONS, cautionsFor } from './format/cautions.ts';
-export { equationTex, equationPlain, type EquationSymbols } from './format/equation.ts';
+export { equationTex, equationPlain, type EquationSymbols, type EquationPlainOptions } from './format/equation.ts';
 export { formatCoefficient } from './format/formatCoefficient.ts';
 export { formatNumber, formatP, formatRSquared, formatInterval, formatToPlace, lastDigitPlace, MISSING } from './format/formatNumber.ts';
 export { transformedXText, transformedYText } from './format/transformText.ts';

@@ -399,4 +399,82 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
       await server.close();
     }
   });
+
+  it('copies the equation as plain text: the copy buttons, and a selection of the typeset equation', async () => {
+    const { chromium } = await import('playwright-core');
+    const server = await serveDirectory(siteRoot);
+    const browser = await chromium.launch({
+      executablePath: CHROMIUM,
+      headless: true,
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+    });
+    try {
+      // An untransformed fit with an intercept, so the expected text is simply y = a0 + a1*x + a2*x^2 + ...
+      const target = correlations.find((correlation) => correlation.meta.fit.transform.x === 'identity' && correlation.meta.fit.transform.y === 'identity' && correlation.meta.fit.intercept)!;
+      const json = JSON.parse(await readFile(path.join(outDir, 'correlations', target.slug, 'coefficients.json'), 'utf8'));
+      const x = target.meta.variable.symbol.replace(/[\\{}]/g, '');
+      const y = target.meta.property.symbol.replace(/[\\{}]/g, '');
+      // Assembled here from the download's printed coefficients and full-precision values (independently of
+      // equationPlain): ASCII minus, * for products, ^ for powers.
+      const assemble = (values: string[]) =>
+        `${y} = ${values.map((text, k) => {
+          const negative = text.startsWith('-');
+          const magnitude = negative ? text.slice(1) : text;
+          const power = k === 0 ? '' : k === 1 ? `*${x}` : `*${x}^${k}`;
+          return `${k === 0 ? (negative ? '-' : '') : negative ? ' - ' : ' + '}${magnitude}${power}`;
+        }).join('')}`;
+      const printed = assemble(json.printedCoefficients as string[]);
+      const full = assemble((json.coefficients as number[]).map((value) => String(value)));
+
+      const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+      await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: server.url });
+      const browserPage = await context.newPage();
+      const errors: string[] = [];
+      browserPage.on('pageerror', (error) => errors.push(String(error)));
+      await browserPage.goto(`${server.url}${BASE}correlations/${target.slug}/`, { waitUntil: 'networkidle' });
+      const clipboard = () => browserPage.evaluate(() => navigator.clipboard.readText());
+
+      await browserPage.locator('.equation-plain-row[data-form="printed"] button.copy-button').click();
+      await browserPage.locator('.equation-plain-row[data-form="printed"] .copy-status', { hasText: 'Copied' }).waitFor({ timeout: 5_000 });
+      expect(await clipboard()).toBe(printed);
+      expect(printed).toMatch(/^[\x20-\x7e]+$/); // ASCII only: no U+2212 minus, no math-italic letters
+      await browserPage.locator('.equation-plain-row[data-form="full"] button.copy-button').click();
+      await browserPage.locator('.equation-plain-row[data-form="full"] .copy-status', { hasText: 'Copied' }).waitFor({ timeout: 5_000 });
+      const copiedFull = await clipboard();
+      expect(copiedFull).toBe(full);
+      // Full precision: the coefficients read back from the copied text are the download's doubles, bit for bit.
+      const readBack = copiedFull.split(' = ')[1]!.replace(/ ([-+]) /g, ' $1').split(' ').map((term) => Number(term.split('*')[0]));
+      expect(readBack).toEqual(json.coefficients);
+
+      // Select the typeset equation as a reader would and copy it: the clipboard gets the printed plain text once.
+      await browserPage.evaluate(() => {
+        const equation = document.querySelector('.equation .katex-html')!;
+        const range = document.createRange();
+        range.selectNodeContents(equation);
+        const selection = document.getSelection()!;
+        selection.removeAllRanges();
+        selection.addRange(range);
+      });
+      await browserPage.keyboard.press('Control+C');
+      await expect.poll(clipboard, { timeout: 5_000 }).toBe(printed);
+      // A passage that holds the equation and text around it keeps the text and puts the plain equation inside.
+      await browserPage.evaluate(() => {
+        const section = document.querySelector('section[aria-labelledby="equation"]')!;
+        const range = document.createRange();
+        range.selectNodeContents(section);
+        document.getSelection()!.removeAllRanges();
+        document.getSelection()!.addRange(range);
+      });
+      await browserPage.keyboard.press('Control+C');
+      await expect.poll(clipboard, { timeout: 5_000 }).toContain(printed);
+      const passage = await clipboard();
+      expect(passage).toContain('Equation');
+      expect(passage).not.toContain('\u2212');
+      expect(errors).toEqual([]);
+      await context.close();
+    } finally {
+      await browser.close();
+      await server.close();
+    }
+  });
 });

@@ -42,17 +42,29 @@ export function equationTex(fit: PolynomialFit, symbols: EquationSymbols): strin
   return `${lhs} = ${terms.join('')}`;
 }
 
+/** Which digits a plain-text equation carries. */
+export interface EquationPlainOptions {
+  /**
+   * `printed` (default): each coefficient with its significant digits, exactly as the page and the TeX print it;
+   * `full`: the shortest decimal that reads back as the same double (every digit the fit has).
+   */
+  readonly digits?: 'printed' | 'full';
+}
+
 /**
- * Plain-text equation for terminals, e.g. "y = 1.23 + 4.5e-3*x - 6.7e-6*x^2".
- * @example equationPlain(fit, { x: 'T', y: 'p' }) // => "ln(p) = 1.5 - 0.25*T" for a₀ = 1.5, a₁ = −0.25 under ln y
+ * Plain-text equation for terminals and copying, ASCII only, e.g. "y = 1.23 + 4.5e-3*x - 6.7e-6*x^2": `*` for
+ * products, `^` for powers, `-` for minus, exponents as e-notation that every programming language reads.
+ * @example equationPlain(fit, { x: 'T', y: 'p' }) gives "ln(p) = 1.5 - 0.25*T" for a₀ = 1.5, a₁ = −0.25 under ln y;
+ * with { digits: 'full' } each coefficient is printed as String(value).
  */
-export function equationPlain(fit: PolynomialFit, symbols: EquationSymbols): string {
+export function equationPlain(fit: PolynomialFit, symbols: EquationSymbols, options: EquationPlainOptions = {}): string {
+  const full = options.digits === 'full';
   const u = variableFactor(fit, symbols.x, 'plain');
   const lhs = transformedYText(fit.transformY, symbols.y, 'plain');
   const terms: string[] = [];
   fit.coefficients.forEach((a, k) => {
     if (k === 0 && !fit.intercept) return;
-    const text = formatCoefficient(Math.abs(a), fit.significantDigits[k]!);
+    const text = full ? String(Math.abs(a)) : formatCoefficient(Math.abs(a), fit.significantDigits[k]!);
     const sign = a < 0 ? '-' : '+';
     const power = k === 0 ? '' : k === 1 ? `*${u}` : `*${u}^${k}`;
     terms.push(`${terms.length === 0 ? (a < 0 ? '-' : '') : ` ${sign} `}${text}${power}`);
