@@ -11,3 +11,6 @@ export { roundForChart } from './roundForChart.ts';
 export { escapeXml } from './escapeXml.ts';
 export { renderFitSvg, type RenderFitSvgOptions } from './renderFitSvg.ts';
 export { buildChartData, curveRows, evenGrid, type BuildChartDataInput, type ChartInputPoint } from './buildChartData.ts';
+export { svgAxes } from './svgAxes.ts';
+export { renderOverlaySvg, SERIES_COLORS, SERIES_DASHES, type OverlaySeries } from './renderOverlaySvg.ts';
+export { overlapComparison, type OverlapComparison } from './overlapComparison.ts';

@@ -5,41 +5,13 @@
  * `correlary fit --plot`. Scales and paths come from chartScales/chartPaths, as in the browser chart.
  * O(n + curve rows).
  */
-import type { ScaleLinear } from 'd3-scale';
 import { CHART_COLORS, CHART_LAYOUT } from './chartLayout.ts';
 import { bandPath, linePath } from './chartPaths.ts';
 import { chartScales } from './chartScales.ts';
 import type { FitChartData } from './chartTypes.ts';
 import { escapeXml } from './escapeXml.ts';
+import { c, svgAxes as axes } from './svgAxes.ts';
 import { residualBandRows } from './residualBandRows.ts';
-
-type Scale = ScaleLinear<number, number>;
-
-/** A coordinate with 2 decimals. */
-function c(value: number): string {
-  return String(Math.round(value * 100) / 100);
-}
-
-/** Axis lines, ticks, tick labels and the two axis titles of one panel, translated by `top`. */
-function axes(x: Scale, y: Scale, height: number, xLabel: string, yLabel: string, yTicks: number): string {
-  const { width, margin } = CHART_LAYOUT;
-  const bottom = height - margin.bottom;
-  const parts: string[] = [];
-  const xFormat = x.tickFormat(8);
-  parts.push(`<path stroke="currentColor" fill="none" d="M${margin.left},${bottom}H${width - margin.right}M${margin.left},${margin.top}V${bottom}"/>`);
-  for (const tick of x.ticks(8)) {
-    const px = c(x(tick));
-    parts.push(`<line x1="${px}" x2="${px}" y1="${bottom}" y2="${bottom + 6}" stroke="currentColor"/><text x="${px}" y="${bottom + 18}" text-anchor="middle">${escapeXml(xFormat(tick))}</text>`);
-  }
-  const yFormat = y.tickFormat(yTicks);
-  for (const tick of y.ticks(yTicks)) {
-    const py = c(y(tick));
-    parts.push(`<line x1="${margin.left - 6}" x2="${margin.left}" y1="${py}" y2="${py}" stroke="currentColor"/><text x="${margin.left - 9}" y="${py}" dy="0.32em" text-anchor="end">${escapeXml(yFormat(tick))}</text>`);
-  }
-  parts.push(`<text x="${c((margin.left + width - margin.right) / 2)}" y="${height - 8}" text-anchor="middle" font-size="12">${escapeXml(xLabel)}</text>`);
-  parts.push(`<text transform="translate(14,${c((margin.top + bottom) / 2)}) rotate(-90)" text-anchor="middle" font-size="12">${escapeXml(yLabel)}</text>`);
-  return `<g font-size="10">${parts.join('')}</g>`;
-}
 
 /** Dots as one path of zero-length round-capped segments: a tenth of the bytes of one circle per point. */
 function dots(points: readonly (readonly [number, number])[], color: string, diameter: number): string {

@@ -19,6 +19,16 @@ export const quantitySchema = z
       .trim()
       .min(1, 'must not be empty')
       .describe('Unit as plain text; write "1" for a dimensionless quantity'),
+    /**
+     * Optional canonical key that groups correlations of the same quantity on one page, e.g.
+     * `specific-heat-capacity`. Defaults to the name in lower case with every run of other characters as one hyphen.
+     */
+    key: z
+      .string()
+      .trim()
+      .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'must be lower-case letters and digits joined by single hyphens, e.g. specific-heat-capacity')
+      .optional()
+      .describe('Canonical key grouping correlations of one quantity, e.g. specific-heat-capacity; defaults to the normalised name'),
   })
   .strict();
 

@@ -23,6 +23,7 @@ import { pythonExactLeastSquares } from '../helpers/pythonExact.ts';
 import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
 import { checkHandbookJson } from './handbookJsonChecks.ts';
+import { describeReading } from './readingChecks.ts';
 import { serveDirectory } from './staticServer.ts';
 
 const CHROMIUM = '/usr/bin/chromium';
@@ -179,7 +180,7 @@ describe('astro build of the demo handbook', () => {
       return new RegExp(`</span> ${words[review.status]}</span>`);
     };
     const html = await readFile(path.join(outDir, 'index.html'), 'utf8');
-    const rows = [...html.matchAll(new RegExp(`<tr(?: class="([^"]*)")?>\\s*<td><a href="${escapeRegExp(BASE)}correlations/([^/]+)/">(.*?)</tr>`, 'gs'))];
+    const rows = [...html.matchAll(new RegExp(`<tr(?: class="([^"]*)")?(?: data-[a-z]+="[^"]*")*>\\s*<td><a href="${escapeRegExp(BASE)}correlations/([^/]+)/">(.*?)</tr>`, 'gs'))];
     expect(rows.length).toBe(correlations.length);
     for (const [, rowClass, slug, row] of rows) {
       const correlation = correlations.find((item) => item.slug === slug)!;
@@ -331,14 +332,14 @@ describe('handbook.json', () => {
 });
 
 describe('the browser only draws', () => {
-  it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, the shared renderer and its own files', async () => {
+  it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, minisearch, the shared renderer and its own files', async () => {
     const directory = path.join(projectRoot, 'src', 'client');
     const offenders: string[] = [];
     for (const name of await readdir(directory)) {
       const text = await readFile(path.join(directory, name), 'utf8');
       for (const match of text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
         const spec = (match[1] ?? match[2])!;
-        if (!(spec.startsWith('./') || spec.startsWith('../render/') || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom'].includes(spec))) offenders.push(`${name} imports ${spec}`);
+        if (!(spec.startsWith('./') || spec.startsWith('../render/') || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom', 'minisearch'].includes(spec))) offenders.push(`${name} imports ${spec}`);
       }
     }
     expect(offenders).toEqual([]);
@@ -477,4 +478,8 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
       await server.close();
     }
   });
+});
+
+describe.skipIf(!existsSync(CHROMIUM))('reading and reviewing (test/site/readingChecks.ts)', () => {
+  describeReading(() => ({ siteRoot, base: BASE, correlations }));
 });

@@ -1,0 +1,221 @@
+/**
+ * Reading and reviewing the built handbook in Debian's Chromium (playwright-core): search, filters in the URL,
+ * zoom and reset, the property page, the order preview, no console errors, and an axe-core accessibility check.
+ * Run from site.test.ts on the site it builds (one build for both: concurrent builds of one package share Astro's
+ * staging folder). Every expected value is derived from the correlations as the loader read them (which material
+ * to search for, which filter narrows, which property has several sources), so the checks hold for any content
+ * with one property of several correlations and one material of several.
+ */
+import { mkdir } from 'node:fs/promises';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import type { LoadedCorrelation } from '../../src/load/index.ts';
+import { propertyKey } from '../../src/components/lib/propertyKey.ts';
+import { serveDirectory } from './staticServer.ts';
+
+const CHROMIUM = '/usr/bin/chromium';
+const require = createRequire(import.meta.url);
+/** Screenshots for a person to look at; kept in the OS temp folder, never in the repository. */
+export const SCREENSHOTS = path.join(process.env['TMPDIR'] ?? '/tmp', 'correlary-screenshots');
+
+/** What the site test hands over: the served root, the base path and the correlations it built. */
+export interface ReadingContext {
+  readonly siteRoot: string;
+  readonly base: string;
+  readonly correlations: readonly LoadedCorrelation[];
+}
+
+let BASE = '/';
+let correlations: readonly LoadedCorrelation[] = [];
+let browser: Browser | undefined;
+let server: { url: string; close: () => Promise<void> } | undefined;
+
+/** A page that records console errors, failed requests and uncaught exceptions. */
+async function open(url: string, waitUntil: 'load' | 'networkidle' = 'networkidle'): Promise<{ page: Page; errors: string[] }> {
+  const page = await browser!.newPage({ viewport: { width: 1280, height: 900 } });
+  const errors: string[] = [];
+  page.on('pageerror', (error) => errors.push(String(error)));
+  page.on('console', (message) => {
+    if (message.type() === 'error') errors.push(message.text());
+  });
+  page.on('response', (response) => {
+    if (response.status() >= 400) errors.push(`HTTP ${response.status()} ${response.url()}`);
+  });
+  await page.goto(`${server!.url}${BASE}${url.replace(/^\//, '')}`, { waitUntil });
+  return { page, errors };
+}
+
+async function catalogueReady(page: Page): Promise<void> {
+  await page.locator('[data-catalogue-controls][data-ready="true"]').waitFor({ state: 'attached', timeout: 10_000 });
+}
+
+async function visibleSlugs(page: Page): Promise<string[]> {
+  return page.locator('[data-catalogue-table] tbody tr:not([hidden])').evaluateAll((rows) => rows.map((row) => (row as HTMLElement).dataset['slug'] ?? ''));
+}
+
+/** Materials with their correlations' slugs, fewest first. */
+function materials(): [string, string[]][] {
+  const map = new Map<string, string[]>();
+  for (const c of correlations) map.set(c.meta.material.name, [...(map.get(c.meta.material.name) ?? []), c.slug]);
+  return [...map.entries()].sort((a, b) => a[1].length - b[1].length || a[0].localeCompare(b[0]));
+}
+
+/** The property key with the most correlations. */
+function busiestProperty(): [string, LoadedCorrelation[]] {
+  const map = new Map<string, LoadedCorrelation[]>();
+  for (const c of correlations) map.set(propertyKey(c.meta.property), [...(map.get(propertyKey(c.meta.property)) ?? []), c]);
+  return [...map.entries()].sort((a, b) => b[1].length - a[1].length || a[0].localeCompare(b[0]))[0]!;
+}
+
+/** Register the reading checks; `context` is called once the site is built. */
+export function describeReading(context: () => ReadingContext): void {
+describe(`reading the handbook in Chromium (${CHROMIUM})`, () => {
+  beforeAll(async () => {
+    const given = context();
+    BASE = given.base;
+    correlations = given.correlations;
+    server = await serveDirectory(given.siteRoot);
+    const { chromium } = await import('playwright-core');
+    browser = await chromium.launch({
+      executablePath: CHROMIUM,
+      headless: true,
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+    });
+    await mkdir(SCREENSHOTS, { recursive: true });
+  }, 60_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  it('the catalogue search finds a correlation by its material', async () => {
+    const { page, errors } = await open('/');
+    await catalogueReady(page);
+    // The material with the fewest correlations, searched by the first word of its name.
+    const [material, expected] = materials()[0]!;
+    const word = material.split(/[\s(]+/)[0]!.toLowerCase();
+    await page.locator('#catalogue-q').fill(word);
+    await page.waitForFunction((q) => new URLSearchParams(location.search).get('q') === q, word);
+    const found = await visibleSlugs(page);
+    for (const slug of expected) expect(found, `${word} finds ${slug}`).toContain(slug);
+    expect(found.length).toBeLessThan(correlations.length);
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'catalogue-search.png'), fullPage: true });
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('a filter narrows the catalogue, goes into the URL and survives a reload', async () => {
+    const { page, errors } = await open('/');
+    await catalogueReady(page);
+    const all = await visibleSlugs(page);
+    expect(all).toHaveLength(correlations.length);
+    const [material, slugs] = materials().filter(([, list]) => list.length > 1).at(-1)!;
+    const expected = [...slugs].sort();
+    expect(expected.length).toBeGreaterThan(1);
+    expect(expected.length).toBeLessThan(correlations.length);
+    await page.locator('#catalogue-material').selectOption(material);
+    expect((await visibleSlugs(page)).sort()).toEqual(expected);
+    expect(new URL(page.url()).searchParams.get('material')).toBe(material);
+    // Sort by n, largest first, by keyboard: focus the header button and press Enter twice.
+    const sortN = page.getByRole('button', { name: 'Sort by n' });
+    await sortN.focus();
+    await page.keyboard.press('Enter');
+    await page.keyboard.press('Enter');
+    const sizes = Object.fromEntries(correlations.map((c) => [c.slug, c.used.length]));
+    const sorted = await visibleSlugs(page);
+    expect(sorted.map((slug) => sizes[slug])).toEqual([...sorted.map((slug) => sizes[slug]!)].sort((a, b) => b - a));
+    await page.reload({ waitUntil: 'networkidle' });
+    await catalogueReady(page);
+    expect(await page.locator('#catalogue-material').inputValue()).toBe(material);
+    expect(await visibleSlugs(page)).toEqual(sorted);
+    expect(await page.locator('[data-catalogue-count]').textContent()).toContain(`${expected.length} of ${correlations.length}`);
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'catalogue-filtered.png'), fullPage: true });
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('zoom by button and keyboard changes the axes, and reset restores them', async () => {
+    const target = correlations[0]!;
+    const { page, errors } = await open(`/correlations/${target.slug}/`);
+    const svg = page.locator('[data-fit-chart] svg').first();
+    await svg.waitFor();
+    // The x axis's tick labels and positions: any zoom or pan moves them.
+    const ticks = () => svg.locator('.axes g').first().locator('.tick').evaluateAll((nodes) => nodes.map((node) => `${node.textContent}@${node.getAttribute('transform')}`));
+    const before = await ticks();
+    await page.getByRole('button', { name: 'Zoom in' }).click();
+    await page.getByRole('button', { name: 'Zoom in' }).click();
+    const zoomed = await ticks();
+    expect(zoomed).not.toEqual(before);
+    await svg.focus();
+    await page.keyboard.press('ArrowRight');
+    expect(await ticks()).not.toEqual(zoomed);
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'chart-zoomed.png') });
+    await page.getByRole('button', { name: 'Reset zoom to the whole chart' }).click();
+    expect(await ticks()).toEqual(before);
+    await svg.focus();
+    await page.keyboard.press('+');
+    expect(await ticks()).not.toEqual(before);
+    await page.keyboard.press('0');
+    expect(await ticks()).toEqual(before);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('the property page draws every source of the property and compares those of one material', async () => {
+    const [key, expected] = busiestProperty();
+    expect(expected.length).toBeGreaterThan(1);
+    const { page, errors } = await open(`/properties/${key}/`);
+    const drawn = await page.locator('[data-overlay-chart] svg g[data-series] path').evaluateAll((paths) => paths.filter((p) => (p.getAttribute('d') ?? '').length > 50).length);
+    expect(drawn).toBe(expected.length);
+    for (const correlation of expected) expect(await page.locator(`.property-table a[href="${BASE}correlations/${correlation.slug}/"]`).count(), correlation.slug).toBe(1);
+    // One comparison row per pair of the same material and units whose validity ranges overlap.
+    let pairs = 0;
+    for (let i = 0; i < expected.length; i++) {
+      for (let j = i + 1; j < expected.length; j++) {
+        const [a, b] = [expected[i]!, expected[j]!];
+        const same = a.meta.material.name === b.meta.material.name && a.meta.property.unit === b.meta.property.unit && a.meta.variable.unit === b.meta.variable.unit;
+        if (same && Math.max(a.range.min, b.range.min) < Math.min(a.range.max, b.range.max)) pairs++;
+      }
+    }
+    expect(await page.locator('.comparison-table tbody tr').count()).toBe(pairs);
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'property-page.png'), fullPage: true });
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('no page logs a console error or fails a request', async () => {
+    const urls = ['/', '/properties/', '/how-orders-are-chosen/', ...correlations.map((c) => `/correlations/${c.slug}/`)];
+    const keys = [...new Set(correlations.map((c) => propertyKey(c.meta.property)))];
+    urls.push(...keys.map((key) => `/properties/${key}/`));
+    for (const url of urls) {
+      const { page, errors } = await open(url, 'load');
+      if (url.startsWith('/correlations/')) await page.locator('[data-fit-chart].chart-drawn').waitFor({ timeout: 10_000 });
+      if (url === '/') await catalogueReady(page);
+      expect(errors, url).toEqual([]);
+      await page.close();
+    }
+  });
+
+  it('axe-core finds no serious or critical violation on the catalogue, a correlation page, a property page and the order page', async () => {
+    const axeSource = require.resolve('axe-core/axe.min.js');
+    const urls = ['/', `/correlations/${busiestProperty()[1][0]!.slug}/`, `/properties/${busiestProperty()[0]}/`, '/how-orders-are-chosen/'];
+    const report: string[] = [];
+    for (const url of urls) {
+      const { page } = await open(url);
+      if (url.startsWith('/correlations/')) await page.locator('[data-fit-chart].chart-drawn').waitFor({ timeout: 10_000 });
+      await page.addScriptTag({ path: axeSource });
+      const result = await page.evaluate(async () => {
+        const axe = (window as unknown as { axe: { run: (context: Document, options: object) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> } }).axe;
+        return axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'best-practice'] } });
+      });
+      for (const violation of result.violations) report.push(`${url} ${violation.impact} ${violation.id}: ${violation.nodes.slice(0, 3).map((node) => node.target.join(' ')).join(' | ')}`);
+      await page.close();
+    }
+    console.log(`axe-core over ${urls.length} pages: ${report.length === 0 ? 'no violations' : `\n${report.join('\n')}`}`);
+    expect(report.filter((line) => / (serious|critical) /.test(line))).toEqual([]);
+  });
+});
+}
