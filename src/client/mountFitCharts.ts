@@ -4,11 +4,19 @@
  * has an order table with previews, the order preview. The static SVG picture is hidden once the chart is drawn.
  */
 import { addChartHover } from './chartHover.ts';
-import { addChartZoom } from './chartZoom.ts';
+import { addChartZoom, type ChartZoom } from './chartZoom.ts';
 import { drawFitChart, type FitChart, type FitChartData } from './fitChart.ts';
 
-/** Charts drawn on this page, by figure, for the modules that act on them (order preview). */
-export const mountedCharts = new Map<HTMLElement, FitChart>();
+export interface MountedChart {
+  readonly chart: FitChart;
+  readonly zoom: ChartZoom;
+}
+
+let resolveReady: (charts: MountedChart[]) => void = () => undefined;
+/** Resolves with the charts of this page once they are drawn, for the modules that act on them (order preview). */
+export const chartsReady = new Promise<MountedChart[]>((resolve) => {
+  resolveReady = resolve;
+});
 
 async function chartDataOf(figure: HTMLElement): Promise<FitChartData | null> {
   const source = figure.querySelector('script[type="application/json"]');
@@ -21,8 +29,8 @@ async function chartDataOf(figure: HTMLElement): Promise<FitChartData | null> {
 }
 
 /** Draw every chart on the page; resolves when all are drawn. */
-export async function mountFitCharts(root: ParentNode = document): Promise<FitChart[]> {
-  const charts: FitChart[] = [];
+export async function mountFitCharts(root: ParentNode = document): Promise<MountedChart[]> {
+  const charts: MountedChart[] = [];
   for (const figure of root.querySelectorAll<HTMLElement>('[data-fit-chart]')) {
     const target = figure.querySelector<HTMLElement>('.chart-target');
     if (!target) continue;
@@ -31,15 +39,15 @@ export async function mountFitCharts(root: ParentNode = document): Promise<FitCh
       if (data === null) continue;
       const chart = drawFitChart(target, data);
       addChartHover(chart);
-      addChartZoom(chart);
+      const zoom = addChartZoom(chart);
       target.removeAttribute('aria-hidden');
       figure.classList.add('chart-drawn');
-      mountedCharts.set(figure, chart);
-      charts.push(chart);
+      charts.push({ chart, zoom });
     } catch (caught) {
       target.textContent = 'The interactive plot could not be drawn; the static picture and the tables keep every number.';
       console.error(caught);
     }
   }
+  resolveReady(charts);
   return charts;
 }

@@ -14,3 +14,4 @@ export { buildChartData, curveRows, evenGrid, type BuildChartDataInput, type Cha
 export { svgAxes } from './svgAxes.ts';
 export { renderOverlaySvg, SERIES_COLORS, SERIES_DASHES, type OverlaySeries } from './renderOverlaySvg.ts';
 export { overlapComparison, type OverlapComparison } from './overlapComparison.ts';
+export { renderOrderStatsSvg, type OrderStatPanel } from './renderOrderStatsSvg.ts';

@@ -164,6 +164,45 @@ describe(`reading the handbook in Chromium (${CHROMIUM})`, () => {
     await page.close();
   });
 
+  it('choosing another order draws its curve and residuals and shows its statistics; back restores the published order', async () => {
+    // A correlation whose order table has at least one other order (every automatic choice with n > 4 has).
+    const target = correlations.find((c) => c.used.length <= 400 && c.used.length >= 10)!;
+    const { page, errors } = await open(`/correlations/${target.slug}/`);
+    await page.locator('[data-order-preview][data-ready="true"]').waitFor({ timeout: 10_000 });
+    const svg = page.locator('[data-fit-chart] svg').first();
+    const previewCurve = () => svg.locator('path.preview-curve').getAttribute('d');
+    const compare = () => page.locator('.order-compare [data-compare-value]').allTextContents();
+    expect(await previewCurve()).toBe('');
+    expect(new Set(await compare())).toEqual(new Set(['—']));
+    const published = Number(await page.locator('[data-preview-order][aria-pressed="true"]').getAttribute('data-preview-order'));
+    const other = page.locator(`[data-preview-order]:not([aria-pressed="true"]):not([disabled])`).first();
+    const order = Number(await other.getAttribute('data-preview-order'));
+    expect(order).not.toBe(published);
+    // By keyboard: focus the button and press Enter.
+    await other.focus();
+    await page.keyboard.press('Enter');
+    expect((await previewCurve())!.length).toBeGreaterThan(50);
+    expect((await page.locator('[data-fit-chart] svg').nth(1).locator('path.preview-residuals').getAttribute('d'))!.length).toBeGreaterThan(10);
+    const shown = await compare();
+    expect(shown[0]).not.toBe('—');
+    expect(await page.locator('[data-compare-head]').textContent()).toBe(`order ${order} (preview)`);
+    // The statistics shown are the order table's for that order: s in the table's 4-digit print agrees.
+    const tableS = await page.locator(`table.orders tr[data-order="${order}"] td`).nth(3).textContent();
+    const previewS = Number(shown[0]);
+    expect(Number(previewS.toPrecision(4))).toBe(Number(tableS));
+    await page.screenshot({ path: path.join(SCREENSHOTS, 'order-preview.png'), fullPage: true });
+    // Click a point of the statistics plot, then a row of the order table.
+    await page.locator(`.order-stats .order-point[data-order="${published}"]`).first().click();
+    expect(await previewCurve()).toBe('');
+    await page.locator(`table.orders tr[data-order="${order}"] .row-preview`).click();
+    expect((await previewCurve())!.length).toBeGreaterThan(50);
+    await page.getByRole('button', { name: 'Back to the published order' }).click();
+    expect(await previewCurve()).toBe('');
+    expect(new Set(await compare())).toEqual(new Set(['—']));
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it('the property page draws every source of the property and compares those of one material', async () => {
     const [key, expected] = busiestProperty();
     expect(expected.length).toBeGreaterThan(1);

@@ -1,0 +1,113 @@
+/**
+ * Previews of the orders the selector did not publish, computed at build time so that a reviewer can see what
+ * they would have looked like: for each order in the order table, its curve with its prediction band on a coarse
+ * grid, its residuals at (a sample of) the points, and its statistics from the order table. Kept small: SAMPLES
+ * curve rows and at most RESIDUAL_SAMPLE residuals per order, numbers rounded for drawing. The published order is
+ * the page's own chart and is not repeated. Floating-point fits (exact certification off): a preview is a picture.
+ */
+import { bands, fitPolynomial, type FitData } from '../../core/index.ts';
+import { evenGrid, roundForChart } from '../../render/index.ts';
+import { usedPoints, type CorrelationEntry, type OrderSelection, type PolynomialFit } from './entryView.ts';
+
+const SAMPLES = 30;
+const RESIDUAL_SAMPLE = 60;
+
+export interface OrderStatistics {
+  readonly s: number | null;
+  readonly rSquared: number | null;
+  readonly adjustedRSquared: number | null;
+  readonly aicc: number | null;
+  readonly bic: number | null;
+  readonly looRmse: number | null;
+  readonly reducedChiSquare: number | null;
+}
+
+export interface OrderPreview {
+  readonly order: number;
+  /** [fit, prediction low, prediction high] at each x of OrderPreviews.grid. */
+  readonly curve: readonly (readonly [number | null, number | null, number | null])[];
+  /** y − ŷ at each x of OrderPreviews.residualX. */
+  readonly residuals: readonly (number | null)[];
+  readonly statistics: OrderStatistics;
+}
+
+export interface OrderPreviews {
+  readonly published: number;
+  readonly statistics: OrderStatistics;
+  /** The x of the curve samples, shared by every order. */
+  readonly grid: readonly number[];
+  /** The x of the residual samples, shared by every order. */
+  readonly residualX: readonly number[];
+  readonly previews: readonly OrderPreview[];
+  /** True when the residuals of the previews are a sample of the points. */
+  readonly sampled: boolean;
+}
+
+function statisticsOf(row: OrderSelection['orders'][number]): OrderStatistics {
+  return {
+    s: roundForChart(row.residualStdDev ?? NaN, 5),
+    rSquared: roundForChart(row.rSquared ?? NaN, 7),
+    adjustedRSquared: roundForChart(row.adjustedRSquared ?? NaN, 7),
+    aicc: roundForChart(row.aicc ?? NaN, 6),
+    bic: roundForChart(row.bic, 6),
+    looRmse: roundForChart(row.looRmse, 5),
+    reducedChiSquare: roundForChart(row.reducedChiSquare ?? NaN, 5),
+  };
+}
+
+/** Indices 0…n−1 thinned evenly to at most `limit`. @example sampleIndices(5, 3) // => [0, 2, 4] */
+export function sampleIndices(n: number, limit: number): number[] {
+  if (n <= limit) return Array.from({ length: n }, (_, i) => i);
+  return Array.from({ length: limit }, (_, i) => Math.round((i * (n - 1)) / (limit - 1)));
+}
+
+/**
+ * Previews of every other order in the table, or null without a table.
+ * @example orderPreviews(entry, fit, selection)?.previews.map((p) => p.order) // => [1, 3, 4, …]
+ */
+export function orderPreviews(entry: CorrelationEntry, fit: PolynomialFit, selection: OrderSelection | null): OrderPreviews | null {
+  if (selection === null || selection.orders.length < 2) return null;
+  const settings = entry.meta.fit;
+  const used = usedPoints(entry);
+  const data: FitData = {
+    x: used.map((point) => point.x),
+    y: used.map((point) => point.y),
+    uncertainty: settings.weights === 'uncertainty' ? used.map((point) => point.uncertainty ?? NaN) : undefined,
+  };
+  const grid = evenGrid(entry.range.min, entry.range.max, SAMPLES);
+  const sample = sampleIndices(used.length, RESIDUAL_SAMPLE);
+  const previews: OrderPreview[] = [];
+  for (const row of selection.orders) {
+    if (row.order === fit.order) continue;
+    try {
+      const other = fitPolynomial(data, {
+        order: row.order,
+        intercept: settings.intercept,
+        transformX: settings.transform.x,
+        transformY: settings.transform.y,
+        constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
+        range: entry.range,
+        exact: 'off',
+        ...(settings.criterion === 'chiSquare' ? { uncertaintyScale: 'stated' as const } : {}),
+      });
+      previews.push({
+        order: row.order,
+        curve: bands(other, grid).map((band) => [roundForChart(band.y, 5), roundForChart(band.predictionLow, 4), roundForChart(band.predictionHigh, 4)]),
+        residuals: sample.map((i) => roundForChart(other.points.residualsOriginal[i] ?? NaN, 3)),
+        statistics: statisticsOf(row),
+      });
+    } catch {
+      // An order the core refuses (e.g. too few points with the constraints) simply has no preview.
+    }
+  }
+  const publishedRow = selection.orders.find((row) => row.order === fit.order);
+  if (publishedRow === undefined || previews.length === 0) return null;
+  return {
+    published: fit.order,
+    statistics: statisticsOf(publishedRow),
+    grid: grid.map((x, i) => (i === 0 || i === SAMPLES - 1 ? x : (roundForChart(x) ?? x))),
+    residualX: sample.map((i) => used[i]!.x),
+    previews,
+    sampled: sample.length < used.length,
+  };
+}
