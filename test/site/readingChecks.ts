@@ -225,6 +225,22 @@ describe(`reading the handbook in Chromium (${CHROMIUM})`, () => {
     await page.close();
   });
 
+  it('printed, a correlation page keeps title, equation, range, cautions, coefficients, check values and the static plot, and drops the chrome', async () => {
+    const target = correlations.find((c) => c.used.length <= 400)!;
+    const { page, errors } = await open(`/correlations/${target.slug}/`);
+    await page.locator('[data-fit-chart].chart-drawn').waitFor({ timeout: 10_000 });
+    await page.emulateMedia({ media: 'print' });
+    const shown = (selector: string) => page.locator(selector).first().evaluate((node) => getComputedStyle(node).display !== 'none' && (node as HTMLElement).offsetHeight > 0);
+    for (const selector of ['h1', '.katex-display', '.range', '.caution', 'table.coefficients', '#check-values', 'img.chart-static']) expect(await shown(selector), selector).toBe(true);
+    for (const selector of ['.site-nav', '.chart-toolbar', '.chart-target', '.order-choice']) expect(await shown(selector), selector).toBe(false);
+    // The static plot has loaded (a broken image has no natural width).
+    expect(await page.locator('img.chart-static').evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+    const pdf = await page.pdf({ path: path.join(SCREENSHOTS, 'correlation-page.pdf'), format: 'A4', printBackground: true });
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it('no page logs a console error or fails a request', async () => {
     const urls = ['/', '/properties/', '/how-orders-are-chosen/', ...correlations.map((c) => `/correlations/${c.slug}/`)];
     const keys = [...new Set(correlations.map((c) => propertyKey(c.meta.property)))];
