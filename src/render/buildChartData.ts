@@ -27,7 +27,7 @@ export interface BuildChartDataInput {
   readonly residualLabel?: string;
   /** Range drawn; defaults to fit.range. */
   readonly range?: { readonly min: number; readonly max: number };
-  /** Grid points of the curve (default 200). */
+  /** Grid points of the curve (default 120: smooth at the chart's 760 units, a few kilobytes of data). */
   readonly count?: number;
 }
 
@@ -75,7 +75,7 @@ export function buildChartData(input: BuildChartDataInput): FitChartData {
     residualLabel: input.residualLabel ?? 'residual y − ŷ',
     confidence: fit.confidence,
     range: { min: range.min, max: range.max },
-    curve: curveRows(fit, range, input.count ?? 200),
+    curve: curveRows(fit, range, input.count ?? 120),
     points,
     excluded: (input.excluded ?? []).map((point) => ({ row: point.row, x: point.x, y: point.y, reason: point.reason })),
   };

@@ -212,7 +212,7 @@ describe('astro build of the demo handbook', () => {
     }
   });
 
-  it('each page carries compact chart data (embedded, or linked above 400 points): 200 grid points from range.min to range.max, and every point', async () => {
+  it('each page carries compact chart data (embedded, or linked above 400 points): 120 grid points from range.min to range.max, and every point', async () => {
     for (const correlation of correlations) {
       const html = await page(correlation.slug);
       const match = /<script type="application\/json">(.*?)<\/script>/s.exec(html);
@@ -226,7 +226,7 @@ describe('astro build of the demo handbook', () => {
         text = await readFile(path.join(outDir, 'correlations', correlation.slug, 'chart-data.json'), 'utf8');
       }
       const data = JSON.parse(text) as { curve: number[][]; points: number[][]; excluded: unknown[] };
-      expect(data.curve).toHaveLength(200);
+      expect(data.curve).toHaveLength(120);
       expect(data.curve[0]![0]).toBe(correlation.range.min);
       expect(data.curve.at(-1)![0]).toBe(correlation.range.max);
       expect(data.points).toHaveLength(correlation.used.length);

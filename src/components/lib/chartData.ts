@@ -11,8 +11,8 @@ export type { FitChartData };
 /** Above this many points the page links its chart data instead of embedding it (keeps the HTML small). */
 export const EMBED_POINT_LIMIT = 400;
 
-/** Chart data for one correlation, with bands on `count` grid points (default 200). */
-export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 200): FitChartData {
+/** Chart data for one correlation, with bands on `count` grid points (default 120). */
+export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 120): FitChartData {
   const { variable, property } = entry.meta;
   return buildChartData({
     fit,
