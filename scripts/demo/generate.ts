@@ -3,16 +3,25 @@
  *
  *   npm run demo:generate                 # writes content/<slug>/correlation.yaml and data.csv
  *   npx tsx scripts/demo/generate.ts --out /tmp/demo
+ *   npx tsx scripts/demo/generate.ts --as-approved   # the lapsed demo correlation as it was when approved
  *
  * Output is byte-for-byte reproducible: every dataset draws from its own Mulberry32 stream seeded with
  * DEMO_SEED and the slug, and every number is printed with a fixed number of digits. test/load/demo.test.ts
  * regenerates into a temporary directory and compares with the committed files.
  * Only the demo folders listed in datasets/index.ts are written; other folders in the directory are left alone.
+ *
+ * Approvals are bound as `correlary approve` binds them: the generator writes the files, fits them like `check`,
+ * and records each approved dataset's fingerprint. A dataset with `approvedRows` is bound to the fingerprint of
+ * those rows (its data were changed after approval: the demo's lapsed approval); one with `bindApproval: false`
+ * gets no fingerprint (the demo's unbound approval). `--as-approved` writes the approved rows instead, which is how
+ * the repository's history got the approved version that the lapsed page compares with.
  */
-import { mkdir, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { stringify } from 'yaml';
+import { fitHandbook } from '../../src/load/index.ts';
 import { METADATA_FILE } from '../../src/schema/index.ts';
 import { DEMO_DATASETS } from './datasets/index.ts';
 import { createRandom, hashString } from './random.ts';
@@ -30,25 +39,66 @@ function csvCell(text: string): string {
   return /[",\r\n]/.test(text) ? `"${text.replaceAll('"', '""')}"` : text;
 }
 
-/** The two files of one dataset, as text. */
-export function renderDataset(dataset: DemoDataset): { metadata: string; data: string } {
+/**
+ * The two files of one dataset, as text.
+ * @param options.fingerprint recorded as review.fingerprint (after review.date)
+ * @param options.asApproved write the rows as they were when approved (see DemoDataset.approvedRows)
+ */
+export function renderDataset(dataset: DemoDataset, options: { fingerprint?: string; asApproved?: boolean } = {}): { metadata: string; data: string } {
   const random = createRandom((DEMO_SEED ^ hashString(dataset.slug)) >>> 0);
-  const rows = dataset.rows(random);
+  const drawn = dataset.rows(random);
+  const rows = options.asApproved && dataset.approvedRows ? dataset.approvedRows(drawn) : drawn;
   const comments = ['Invented demonstration data (see correlation.yaml); not a real measurement.', ...(dataset.comments ?? [])];
   const data = comments.map((line) => `# ${line}\n`).join('') + rows.map((row) => row.map(csvCell).join(',') + '\n').join('');
-  const metadata = METADATA_HEADER + stringify(dataset.meta, { lineWidth: 0 });
+  const meta = options.fingerprint === undefined ? dataset.meta : { ...dataset.meta, review: withFingerprint(dataset.meta.review ?? {}, options.fingerprint) };
+  const metadata = METADATA_HEADER + stringify(meta, { lineWidth: 0 });
   return { metadata, data };
+}
+
+/** The review block with the fingerprint right after the date, where `correlary approve` puts it in a new block. */
+function withFingerprint(review: Record<string, unknown>, fingerprint: string): Record<string, unknown> {
+  const entries = Object.entries(review).filter(([key]) => key !== 'fingerprint');
+  const at = entries.findIndex(([key]) => key === 'date') + 1;
+  entries.splice(at > 0 ? at : entries.length, 0, ['fingerprint', fingerprint]);
+  return Object.fromEntries(entries);
+}
+
+/** Fingerprints of the approved datasets as they were approved: written to a scratch folder and fitted like check. */
+async function approvedFingerprints(): Promise<Map<string, string>> {
+  const bound = DEMO_DATASETS.filter((dataset) => dataset.meta.review?.status === 'approved' && dataset.bindApproval !== false);
+  const scratch = await mkdtemp(path.join(tmpdir(), 'correlary-demo-approved-'));
+  try {
+    for (const dataset of bound) {
+      const folder = path.join(scratch, dataset.slug);
+      await mkdir(folder, { recursive: true });
+      const { metadata, data } = renderDataset(dataset, { asApproved: true });
+      await writeFile(path.join(folder, METADATA_FILE), metadata);
+      await writeFile(path.join(folder, 'data.csv'), data);
+    }
+    const handbook = await fitHandbook(scratch);
+    const fingerprints = new Map<string, string>();
+    for (const { dataset, review } of handbook.datasets) {
+      const text = review?.fingerprint?.text;
+      if (text === undefined) throw new Error(`generateDemo requires every approved demo dataset to fit; ${dataset.slug} does not`);
+      fingerprints.set(dataset.slug, text);
+    }
+    return fingerprints;
+  } finally {
+    await rm(scratch, { recursive: true, force: true });
+  }
 }
 
 /**
  * Write every demo dataset under `directory`. Returns the paths written, relative to `directory`.
  */
-export async function generateDemo(directory: string): Promise<string[]> {
+export async function generateDemo(directory: string, options: { asApproved?: boolean } = {}): Promise<string[]> {
+  const fingerprints = await approvedFingerprints();
   const written: string[] = [];
   for (const dataset of DEMO_DATASETS) {
     const folder = path.join(directory, dataset.slug);
     await mkdir(folder, { recursive: true });
-    const { metadata, data } = renderDataset(dataset);
+    const fingerprint = fingerprints.get(dataset.slug);
+    const { metadata, data } = renderDataset(dataset, { ...(fingerprint === undefined ? {} : { fingerprint }), asApproved: options.asApproved ?? false });
     await writeFile(path.join(folder, METADATA_FILE), metadata);
     await writeFile(path.join(folder, 'data.csv'), data);
     written.push(path.join(dataset.slug, METADATA_FILE), path.join(dataset.slug, 'data.csv'));
@@ -61,10 +111,10 @@ if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
   const outIndex = args.indexOf('--out');
   const directory = outIndex >= 0 ? args[outIndex + 1] : 'content';
   if (directory === undefined) {
-    console.error('usage: tsx scripts/demo/generate.ts [--out DIR]');
+    console.error('usage: tsx scripts/demo/generate.ts [--out DIR] [--as-approved]');
     process.exitCode = 2;
   } else {
-    const written = await generateDemo(directory);
+    const written = await generateDemo(directory, { asApproved: args.includes('--as-approved') });
     console.log(`wrote ${written.length} files for ${DEMO_DATASETS.length} demo correlations in ${directory}`);
   }
 }

@@ -23,4 +23,11 @@ export interface DemoDataset {
   readonly rows: (random: Random) => string[][];
   /** Comment lines written at the top of data.csv (without the leading '# '). */
   readonly comments?: readonly string[];
+  /**
+   * For an approved dataset: the rows as they were when it was approved, when they have changed since. The
+   * generator binds the approval to the fingerprint of those rows, so the demo shows a lapsed approval.
+   */
+  readonly approvedRows?: (rows: string[][]) => string[][];
+  /** False for an approval recorded without a fingerprint (an unbound approval). Defaults to true. */
+  readonly bindApproval?: boolean;
 }

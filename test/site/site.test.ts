@@ -332,6 +332,34 @@ describe('handbook.json', () => {
 });
 
 describe('the browser only draws', () => {
+  it('handbook.json carries each fingerprint and approval as check computes them; handbook-approved.json lists only approvals that hold', async () => {
+    // The expected states come from fitHandbook (what 'correlary check' reports) on the same copied content.
+    const checked = await fitHandbook(path.join(workDir, 'content'));
+    const all = JSON.parse(await readFile(path.join(outDir, 'handbook.json'), 'utf8'));
+    const approved = JSON.parse(await readFile(path.join(outDir, 'handbook-approved.json'), 'utf8'));
+    const holding: string[] = [];
+    for (const { dataset, review } of checked.datasets) {
+      const item = all.correlations.find((entry: { slug: string }) => entry.slug === dataset.slug);
+      expect(item.fingerprint, dataset.slug).toBe(review!.fingerprint!.text);
+      expect(item.approval.state, dataset.slug).toBe(review!.approval.state);
+      expect(item.approval.holds, dataset.slug).toBe(review!.approval.state === 'holds');
+      if (review!.approval.state === 'holds') holding.push(dataset.slug);
+    }
+    expect(approved.formatVersion).toBe(all.formatVersion);
+    expect(approved.cautions).toEqual(all.cautions);
+    expect(approved.correlations.map((entry: { slug: string }) => entry.slug)).toEqual(holding.sort());
+    for (const entry of approved.correlations) expect(entry.approval.holds).toBe(true);
+  });
+
+  it('every page has a history section, which says history is not available outside a git repository', async () => {
+    for (const correlation of correlations) {
+      const html = await page(correlation.slug);
+      expect(html, correlation.slug).toContain('<h2 id="history">History</h2>');
+      expect(html, correlation.slug).toContain('History is not available: the content folder is not in a git repository.');
+      expect(html, correlation.slug).toMatch(/<dt>Fingerprint now<\/dt><dd><span class="fingerprint">fp1-[0-9a-f]{16}-[0-9a-f]{16}-[0-9a-f]{16}<\/span>/);
+    }
+  });
+
   it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, minisearch, the shared renderer and its own files', async () => {
     const directory = path.join(projectRoot, 'src', 'client');
     const offenders: string[] = [];

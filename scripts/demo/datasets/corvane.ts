@@ -55,7 +55,14 @@ export const corvaneSpecificHeatSupplier: DemoDataset = {
     data: { x: 'T_K', y: 'cp' },
     fit: { criterion: 'aicc' },
     tags: ['coolant', 'Corvane-12', 'specific heat', 'two sources'],
-    review: { status: 'in-review', reviewer: 'R. Castellane (fictitious)' },
+    review: {
+      status: 'withdrawn',
+      reviewer: 'R. Castellane (fictitious)',
+      notes: 'Compared with the in-house DSC series during review (invented review note).',
+      withdrawnReason: 'Superseded: the in-house DSC measurements cover the same range with a stated uncertainty, and the printed table gives none (invented reason).',
+      withdrawnDate: '2026-03-21',
+      replacedBy: 'corvane-12-specific-heat',
+    },
   },
   comments: ['Read from the (fictitious) supplier table; values rounded to 4 significant digits there.'],
   rows: () => [

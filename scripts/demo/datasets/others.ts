@@ -7,6 +7,7 @@ import { INVENTED_NOTICE, TEAM, type DemoDataset } from '../scenario.ts';
 
 export const marrowliteConductivity: DemoDataset = {
   slug: 'marrowlite-p6-conductivity',
+  bindApproval: false,
   meta: {
     title: 'Thermal conductivity of Marrowlite P6 insulation foam',
     invented: true,
@@ -24,7 +25,12 @@ export const marrowliteConductivity: DemoDataset = {
     data: { x: 'T_K', y: 'lambda' },
     fit: { order: 1, reason: 'eight points over 120 K; the hot-plate method is linear in this range and a higher order would fit noise' },
     tags: ['insulation', 'Marrowlite P6', 'thermal conductivity', 'small data set'],
-    review: { status: 'approved', reviewer: 'R. Castellane (fictitious)', date: '2025-11-04' },
+    review: {
+      status: 'approved',
+      reviewer: 'R. Castellane (fictitious)',
+      date: '2025-11-04',
+      notes: 'Approved before approvals recorded a fingerprint: shown as an unbound approval until it is reviewed again (invented review note).',
+    },
   },
   rows: (random) => [
     ['T_K', 'lambda'],

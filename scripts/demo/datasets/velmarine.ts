@@ -30,6 +30,9 @@ export const velmarineSpecificHeat: DemoDataset = {
     tags: ['heat-transfer oil', 'Velmarine HT-40', 'specific heat', 'replicates'],
     review: { status: 'approved', reviewer: 'R. Castellane (fictitious)', date: '2026-01-08' },
   },
+  comments: ['Run C at 190 °C corrected from the raw file after the review: it had been typed 12 J/(kg·K) low (invented correction).'],
+  // The approval was given to the file before that correction, so the demo shows it as lapsed (data changed).
+  approvedRows: (rows) => rows.map((row) => (row[0] === '190' && row[2] === 'C' ? [row[0], String(Number(row[1]) - 12), row[2]] : row)),
   rows: (random) => {
     const rows: string[][] = [['t_C', 'cp', 'run']];
     for (const celsius of linspace(40, 310, 10)) {
