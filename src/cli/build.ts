@@ -6,7 +6,8 @@
  * Correlary package's own pages, with the content folder handed to the loader through CORRELARY_CONTENT.
  * Exit status: 0 built, 1 errors in the content or a failed build, 2 bad usage.
  */
-import { mkdir, readdir, stat } from 'node:fs/promises';
+import { createHash } from 'node:crypto';
+import { mkdir, mkdtemp, readdir, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { fitHandbook, formatDiagnostic } from '../load/index.ts';
@@ -64,7 +65,10 @@ export async function runBuild(args: string[]): Promise<number> {
 
   // The check pass: report every problem and stop before anything is written.
   // The check pass fills the fit cache that Astro's loader then reads, so each dataset is fitted once per build.
-  const cacheDir = path.resolve('node_modules', '.cache', 'correlary');
+  // One cache folder per content folder: Astro keeps its data store there, so two builds of different handbooks
+  // (or of a test's copy beside the real one) running at the same time must not share it.
+  const contentKey = createHash('sha256').update(content).digest('hex').slice(0, 16);
+  const cacheDir = path.resolve('node_modules', '.cache', 'correlary', `content-${contentKey}`);
   const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(packageRoot()) };
   const progress = createProgress();
   progress.update(`reading ${options.content}`);
@@ -90,9 +94,12 @@ export async function runBuild(args: string[]): Promise<number> {
   // bookkeeping files: such builds run from a staging folder inside the package's node_modules.
   const workingDirectory = process.cwd();
   const outside = !out.startsWith(`${workingDirectory}${path.sep}`);
+  let staging: string | undefined;
   if (outside) {
-    const staging = path.join(root, 'node_modules', '.cache', 'correlary-staging');
-    await mkdir(staging, { recursive: true });
+    // A fresh staging folder per build: concurrent builds must not stage into (and copy out of) the same one.
+    const stagingParent = path.join(root, 'node_modules', '.cache');
+    await mkdir(stagingParent, { recursive: true });
+    staging = await mkdtemp(path.join(stagingParent, 'correlary-staging-'));
     process.chdir(staging);
   }
   // On a terminal, count the pages written so far while Astro builds (Astro itself is kept quiet above warnings).
@@ -116,6 +123,7 @@ export async function runBuild(args: string[]): Promise<number> {
     if (pagesTimer !== undefined) clearInterval(pagesTimer);
     progress.done();
     if (outside) process.chdir(workingDirectory);
+    if (staging !== undefined) await rm(staging, { recursive: true, force: true });
   }
   const count = handbook.datasets.filter((dataset) => dataset.fitted?.fit !== undefined).length;
   const pages = (await readdir(out, { recursive: true })).filter((name) => name.endsWith('.html')).length;
