@@ -270,6 +270,13 @@ describe('astro build of the demo handbook', () => {
     expect(html).toContain(`Rows 1–50 and every flagged row`);
   });
 
+  it('the order page names every criterion in words, with no internal benchmark labels', async () => {
+    const html = await readFile(path.join(outDir, 'how-orders-are-chosen', 'index.html'), 'utf8');
+    // Labels the benchmark script uses internally (scripts/bench/order/criteriaUnderTest.ts) must not reach the page.
+    expect(html).not.toMatch(/x oracle|8g rule|rule 8|<td[^>]*>\d+ (?:s²|adj|AICc|BIC|LOOCV|sequential|lowest|χ²)/);
+    expect(html).toMatch(/<td[^>]*>best order in hindsight \(out-of-sample\)<\/td>/);
+  });
+
   it('the order page sets the F statistic in KaTeX like every other formula', async () => {
     const html = await readFile(path.join(outDir, 'how-orders-are-chosen', 'index.html'), 'utf8');
     expect(html).toContain('class="katex-display"');
