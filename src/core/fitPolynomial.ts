@@ -142,8 +142,15 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const floor = 1e-13 * scaleV || 1e-300;
   // Digits rule: rounding the printed coefficients may move the curve by at most 1 % of the uncertainty of a new
   // observation at each x — the local stated σ (scaled as the band is) for a weighted fit, s otherwise.
+  const uncertaintyModel = weighted && options.uncertaintyModel ? { relative: options.uncertaintyModel.relative } : null;
+  const mappedForm = { map, coefficients: mappedCoefficients, covariance: mappedCovariance };
   const localAt = (x: number) =>
-    profile === null ? unweightedSd : localUncertainty({ uncertaintyProfile: profile, uncertaintyScale, statistics: { residualStdDev: residualStats.residualStdDev } as PolynomialFit['statistics'] }, x);
+    profile === null
+      ? unweightedSd
+      : localUncertainty(
+          { uncertaintyProfile: profile, uncertaintyScale, uncertaintyModel, transformX, transformY, mapped: mappedForm, range, order, statistics: { residualStdDev: residualStats.residualStdDev } as PolynomialFit['statistics'] },
+          x,
+        );
   const digitTolerance = (uValue: number) => Math.max(0.01 * (localAt(inverseX(transformX, uValue)) || 0), floor);
 
   const partial = { transformX, transformY, mapped: { map, coefficients: mappedCoefficients, covariance: mappedCovariance }, range, order };
@@ -196,6 +203,7 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     printedCheckValues: printed.checkValues,
     uncertaintyScale,
     uncertaintyProfile: profile,
+    uncertaintyModel,
     confidence,
     predictionScale: meanSquareSigma,
     statistics: {

@@ -51,6 +51,11 @@ export interface FitOptions {
    */
   readonly uncertaintyScale?: 'stated' | 'scatter';
   /**
+   * The uncertainty model the metadata states, for a weighted fit: a relative standard uncertainty (0.01 for 1 %)
+   * of y. When given, the local uncertainty at x is relative·|ŷ(x)| instead of σ interpolated between points.
+   */
+  readonly uncertaintyModel?: { readonly relative: number } | undefined;
+  /**
    * Exact rational certification of the coefficients and their statistics (default 'auto'). Without transforms
    * the inputs are the decimals the user wrote; under a transform, the transformed values as computed (the
    * transform's own rounding, half an ulp, is then part of the data). 'off' keeps the floating-point solution.
@@ -201,6 +206,8 @@ export interface PolynomialFit {
    * the local uncertainty at any x is interpolated; null for an unweighted fit.
    */
   readonly uncertaintyProfile: { readonly x: readonly number[]; readonly sigma: readonly number[] } | null;
+  /** The stated relative uncertainty model used for the local uncertainty of a weighted fit, or null. */
+  readonly uncertaintyModel: { readonly relative: number } | null;
   readonly confidence: number;
   /**
    * Variance of a new observation relative to s² for an unweighted fit (1); for a weighted fit the RMS of the stated

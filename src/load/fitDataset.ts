@@ -61,6 +61,8 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
       range: correlation.range,
       // χ² mode: the stated uncertainties are taken as known, so coefficient uncertainties and bands are not rescaled.
       uncertaintyScale: fitSettings.criterion === 'chiSquare' ? 'stated' : 'scatter',
+      // A relative uncertainty stated in the metadata is the model of the local uncertainty of a weighted fit.
+      ...(fitSettings.weights === 'uncertainty' && correlation.meta.uncertainty?.relative !== undefined ? { uncertaintyModel: { relative: correlation.meta.uncertainty.relative } } : {}),
     });
   } catch (caught) {
     if (caught instanceof FitError) diagnostics.push(fitErrorDiagnostic(correlation, caught));

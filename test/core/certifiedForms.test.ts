@@ -101,6 +101,14 @@ describe('weighted fits use the local uncertainty', () => {
     expect(halfLow).toBeLessThan(10 * sigma[0]!);
   });
 
+  it('localUncertainty follows a stated relative model: relative·|ŷ(x)| (scaled by s outside χ² mode)', () => {
+    const fit = fitPolynomial({ x, y, uncertainty: sigma }, { order: 4, uncertaintyModel: { relative: 0.01 }, uncertaintyScale: 'stated' });
+    for (const t of [1, 5.5, 16]) {
+      // σ(x) = 1 % of the fitted value (the model stated), by definition.
+      expect(Math.abs(localUncertainty(fit, t) / (0.01 * evaluateFit(fit, t).y) - 1)).toBeLessThan(1e-12);
+    }
+  });
+
   it('fitPolynomial χ² mode: standard errors from the stated σ, unscaled; otherwise scaled by s', () => {
     const noisy = y.map((value, i) => value + (i % 2 ? 1.5 : -1.5) * sigma[i]!);
     const scaled = fitPolynomial({ x, y: noisy, uncertainty: sigma }, { order: 4 });

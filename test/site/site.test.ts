@@ -18,7 +18,7 @@ import { cp, mkdir, mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/pr
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CAUTIONS, cautionsFor, fittedSpaceWeights, forwardX, forwardY } from '../../src/core/index.ts';
+import { CAUTIONS, cautionsFor, fittedSpaceWeights, forwardX, forwardY, lastPrintedPlace } from '../../src/core/index.ts';
 import { pythonExactLeastSquares } from '../helpers/pythonExact.ts';
 import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
@@ -307,6 +307,29 @@ describe('astro build of the demo handbook', () => {
       expect(typeof json.equation).toBe('string');
       expect(json.provenance.source.citation).toBe(correlation.meta.source.citation);
     }
+  });
+
+  it('the vapour-pressure page: its printed check values match its printed equation and catch a one-digit change of any coefficient (Python)', async () => {
+    const slug = 'quillane-vapour-pressure';
+    if (!correlations.some((correlation) => correlation.slug === slug)) return;
+    const json = JSON.parse(await readFile(path.join(outDir, 'correlations', slug, 'coefficients.json'), 'utf8'));
+    const checks = json.printedCheckValues as { x: number; y: string; tolerance: number }[];
+    const html = await page(slug);
+    for (const check of checks) expect(html).toContain(check.y);
+    const xs = checks.map((check) => check.x);
+    const printed = json.printedCoefficients as string[];
+    const miss = (values: number[]) => values.some((value, i) => Math.abs(value - Number(checks[i]!.y)) > checks[i]!.tolerance);
+    expect(miss(pythonPrintedValues(printed, json.transforms.x, json.transforms.y, xs))).toBe(false);
+    printed.forEach((text, k) => {
+      for (const sign of [1, -1]) {
+        // ±1 in the last printed digit, done on the decimal text: 13.88924 → 13.88925 / 13.88923.
+        const place = lastPrintedPlace(text);
+        const digits = text.replace(/e.*$/i, '').replace('.', '');
+        const changed = `${BigInt(digits) + BigInt(sign)}e${place}`;
+        const wrong = printed.map((entry, j) => (j === k ? changed : entry));
+        expect(miss(pythonPrintedValues(wrong, json.transforms.x, json.transforms.y, xs)), `a${k} = ${text} → ${changed}`).toBe(true);
+      }
+    });
   });
 
   it('coefficients.csv: cautions as # comment lines, then a header and full-precision coefficients', async () => {

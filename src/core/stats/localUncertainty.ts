@@ -4,12 +4,14 @@
  *
  * For a weighted fit the stated standard uncertainties σ_i (taken to the fitted space: σ/|y| under ln y) are
  * combined per distinct x as their root mean square, and σ(x) is interpolated linearly between the neighbouring
- * distinct x (held constant beyond the outermost points). In χ² mode ('stated') σ(x) is used as it is; otherwise
+ * distinct x (held constant beyond the outermost points) — or, when the metadata states a relative uncertainty,
+ * relative·|ŷ(x)| (relative itself under ln y). In χ² mode ('stated') σ(x) is used as it is; otherwise
  * ('scatter') it is scaled by s = √(reduced χ²), as the coefficient covariance is. For an unweighted fit the
  * uncertainty is s at every x.
  *
  * Cost: O(log n) per x after an O(n log n) profile.
  */
+import { evaluateFit } from '../evaluate.ts';
 import type { PolynomialFit } from '../types.ts';
 
 /**
@@ -53,11 +55,19 @@ export function profileAt(profile: { readonly x: readonly number[]; readonly sig
  * @example localUncertainty(unweightedFit, 300) // => unweightedFit.statistics.residualStdDev
  */
 export function localUncertainty(
-  fit: Pick<PolynomialFit, 'uncertaintyProfile' | 'uncertaintyScale' | 'statistics'>,
+  fit: Pick<PolynomialFit, 'uncertaintyProfile' | 'uncertaintyScale' | 'statistics'> &
+    Partial<Pick<PolynomialFit, 'uncertaintyModel' | 'transformX' | 'transformY' | 'mapped' | 'range' | 'order'>>,
   x: number,
 ): number {
   const s = fit.statistics.residualStdDev;
   if (fit.uncertaintyProfile === null || fit.uncertaintyProfile === undefined) return s;
-  const sigma = profileAt(fit.uncertaintyProfile, x);
+  const model = fit.uncertaintyModel;
+  let sigma: number;
+  if (model && fit.mapped && fit.transformX && fit.transformY && fit.range && fit.order !== undefined) {
+    const evaluation = evaluateFit(fit as Pick<PolynomialFit, 'transformX' | 'transformY' | 'mapped' | 'range' | 'order'>, x, { extrapolate: true });
+    sigma = fit.transformY === 'log' ? model.relative : model.relative * Math.abs(evaluation.y);
+  } else {
+    sigma = profileAt(fit.uncertaintyProfile, x);
+  }
   return fit.uncertaintyScale === 'stated' ? sigma : sigma * s;
 }
