@@ -38,12 +38,14 @@ options for a CSV file:
   --exclude-row N           leave data row N (1 = first row after the header) out; may be repeated
 options for both:
   --json                    print the export record as JSON instead of the report
+  --plot FILE.svg           also write a static picture of the fit (data, curve, bands, residuals)
   -h, --help                print this help`;
 
 interface FitArguments {
   readonly target: string;
   readonly values: Record<string, string | boolean | string[] | undefined>;
   readonly json: boolean;
+  readonly plot: string | undefined;
 }
 
 const OPTIONS = {
@@ -62,6 +64,7 @@ const OPTIONS = {
   'pass-through': { type: 'string', multiple: true },
   'exclude-row': { type: 'string', multiple: true },
   json: { type: 'boolean' },
+  plot: { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 } as const;
 
@@ -100,7 +103,9 @@ function parseFitArguments(args: readonly string[]): FitArguments | null {
   if (values.order !== undefined && values.criterion !== undefined) {
     throw new CliError('--order and --criterion cannot be used together: a fixed order is not chosen by a criterion', 2);
   }
-  return { target: positionals[0]!, values: values as FitArguments['values'], json: values.json ?? false };
+  if (values.plot === '') throw new CliError(`--plot needs a file name\n${FIT_USAGE}`, 2);
+  const { plot, ...rest } = values;
+  return { target: positionals[0]!, values: rest as FitArguments['values'], json: values.json ?? false, plot };
 }
 
 /** The content format's names in the loader's messages, as the command line's options. */
@@ -245,6 +250,10 @@ export async function runFit(
     fit: fitted.fit,
     selection: fitted.selection ?? null,
   });
+  if (options.plot !== undefined) {
+    const { writeFitPlot } = await import('./fitPlot.ts');
+    await writeFitPlot(options.plot, [options.target, correlation.dataPath, correlation.metadataPath], correlation, fitted.fit);
+  }
   if (options.json) {
     out(JSON.stringify({ ...record, input: { file: options.target, columns: isFolder ? null : { x: correlation.meta.data.x, y: correlation.meta.data.y, uncertainty: correlation.meta.data.uncertainty ?? null } } }, null, 2));
   } else {

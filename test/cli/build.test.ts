@@ -4,7 +4,7 @@
  * test/package.
  */
 import { existsSync } from 'node:fs';
-import { mkdtemp, rm } from 'node:fs/promises';
+import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -63,5 +63,24 @@ describe('correlary build', () => {
     expect(result.stderr.split('\n').slice(0, -1)).toEqual(problems);
     expect(result.stderr.split('\n').at(-1)).toMatch(/^correlary: build stopped before writing anything: \d+ errors? in test\/fixtures\/content\/bad-values/);
     expect(existsSync(out)).toBe(false);
+  });
+});
+
+describe('correlary fit --plot', () => {
+  it('correlary fit <folder> --plot FILE.svg writes the static picture with the cautions, and refuses a name without .svg', async () => {
+    const scratch = await mkdtemp(path.join(tmpdir(), 'correlary-plot-'));
+    temporary.push(scratch);
+    const file = path.join(scratch, 'fit.svg');
+    const result = await runCli(['fit', 'test/fixtures/content/valid/liquid-a', '--plot', file]);
+    expect(result.code, result.stderr).toBe(0);
+    const svg = await readFile(file, 'utf8');
+    expect(svg.startsWith('<svg')).toBe(true);
+    expect(svg).toContain('<title id="fit-svg-title">Specific heat of test liquid A: data, fitted curve and bands; residuals below</title>');
+    expect(svg).toMatch(/<desc>Cautions: Valid only for 280 K ≤ temperature ≤ 350 K .*qualified engineer\.<\/desc>/);
+    // Curve, bands and points are paths drawn by the shared renderer (src/render, also behind the pages' plot.svg).
+    expect(svg.match(/<path/g)?.length ?? 0).toBeGreaterThan(3);
+    const wrong = await runCli(['fit', 'test/fixtures/content/valid/liquid-a', '--plot', path.join(scratch, 'fit.png')]);
+    expect(wrong.code).toBe(2);
+    expect(wrong.stderr).toMatch(/--plot needs a file name ending in \.svg/);
   });
 });
