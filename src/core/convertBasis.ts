@@ -13,7 +13,7 @@
  * Cost: O(m²) rational operations.
  */
 import { decimalRational } from './exact/decimal.ts';
-import { add, multiply, rational, reduce, toNumber, type Rational } from './exact/rational.ts';
+import { add, fromDouble, multiply, rational, reduce, toNumber, type Rational } from './exact/rational.ts';
 import type { DomainMap } from './types.ts';
 
 function binomial(n: number, k: number): bigint {
@@ -90,19 +90,7 @@ export function mappedFromPowerExact(coefficients: readonly Rational[], map: Dom
  * @example mappedToPower([1, 1], { center: 2, halfWidth: 1 }) // => [-1, 1]
  */
 export function mappedToPower(mapped: readonly number[], map: DomainMap): number[] {
-  return powerFromMappedExact(mapped.map((value) => binaryRational(value)), map).map(toNumber);
-}
-
-/** Exact value of a double (dyadic rational). */
-function binaryRational(value: number): Rational {
-  if (value === 0) return rational(0n);
-  let mantissa = value;
-  let exponent = 0;
-  while (!Number.isInteger(mantissa)) {
-    mantissa *= 2;
-    exponent += 1;
-  }
-  return rational(BigInt(mantissa), 1n << BigInt(exponent));
+  return powerFromMappedExact(mapped.map((value) => fromDouble(value)), map).map(toNumber);
 }
 
 /**
