@@ -30,10 +30,21 @@ function make(
   message: string,
   hint: string | undefined,
 ): Diagnostic {
-  const diagnostic: Diagnostic = { severity, file, line: position.line, message };
+  const diagnostic: Diagnostic = { severity, file, line: position.line, message: oneLine(message) };
   if (position.column !== undefined) diagnostic.column = position.column;
-  if (hint !== undefined) diagnostic.hint = hint;
+  if (hint !== undefined) diagnostic.hint = oneLine(hint);
   return diagnostic;
+}
+
+const CONTROL_ESCAPES: Record<string, string> = { '\n': '\\n', '\r': '\\r', '\t': '\\t' };
+
+/**
+ * A message quotes what the user wrote, and a quoted CSV cell may hold line breaks or other control characters:
+ * they are shown escaped (`\r\n`, `\u0000`) so that every problem stays on one line of the report.
+ * @example oneLine("non-numeric value '\r\n,'") // => "non-numeric value '\\r\\n,'"
+ */
+export function oneLine(text: string): string {
+  return text.replace(/[\u0000-\u001f\u007f]/g, (character) => CONTROL_ESCAPES[character] ?? `\\u${character.charCodeAt(0).toString(16).padStart(4, '0')}`);
 }
 
 /**

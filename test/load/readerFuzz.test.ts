@@ -75,7 +75,8 @@ describe('the reader under random input', () => {
       fc.asyncProperty(fc.array(fc.constantFrom(...CSV_ALPHABET), { maxLength: 300 }), async (tokens) => {
         expectUserMessages(await readFolder(validYaml, `T,cp\n${tokens.join('')}`));
       }),
-      settings,
+      // A quoted cell holding a line break once made a two-line message (found by this test in CI, seed -1923328044).
+      { ...settings, examples: [[['"', '\r\n', ',', '"', ',', '9', '0', 'cp', 'cp', '0']]] },
     );
   }, 60_000);
 
