@@ -17,17 +17,14 @@ import {
   mappedFromPowerExact,
   powerFromMappedExact,
   rational,
-  reduce,
   runsTest,
   toNumber,
   type Rational,
 } from '../../src/core/index.ts';
 import { pythonFractions } from '../helpers/pythonExact.ts';
+import { rationalText } from '../helpers/rationalText.ts';
 
-const text = (value: Rational) => {
-  const r = reduce(value);
-  return `${r.num}/${r.den}`;
-};
+const text = rationalText;
 
 describe('exact change of basis', () => {
   it('mappedFromPowerExact then powerFromMappedExact gives back the coefficients exactly (random rationals)', () => {

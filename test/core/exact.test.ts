@@ -15,7 +15,6 @@ import {
   multiply,
   parseDecimal,
   rational,
-  reduce,
   scaleToIntegers,
   solveExact,
   subtract,
@@ -23,11 +22,9 @@ import {
   type Rational,
 } from '../../src/core/index.ts';
 import { pythonExactLeastSquares, pythonFractions } from '../helpers/pythonExact.ts';
+import { rationalText } from '../helpers/rationalText.ts';
 
-const text = (value: Rational) => {
-  const r = reduce(value);
-  return `${r.num}/${r.den}`;
-};
+const text = rationalText;
 
 describe('decimal reading', () => {
   it('decimalParts reads the decimal a double prints as (computed by hand)', () => {
