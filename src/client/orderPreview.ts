@@ -17,12 +17,13 @@ interface Previews {
     readonly order: number;
     readonly curve: readonly (readonly [number | null, number | null, number | null])[];
     readonly residuals: readonly (number | null)[];
-    readonly statistics: Record<string, number | null>;
+    /** Printed at build time with the order table's rules. */
+    readonly statistics: Record<string, string>;
   }[];
 }
 
 /** The chart's preview layer for one order: rows [x, fit, low, high] and [x, residual]. */
-function previewData(data: Previews, order: number): (OrderPreviewData & { statistics: Record<string, number | null> }) | null {
+function previewData(data: Previews, order: number): (OrderPreviewData & { statistics: Record<string, string> }) | null {
   const preview = data.previews.find((p) => p.order === order);
   if (preview === undefined) return null;
   return {
@@ -33,8 +34,8 @@ function previewData(data: Previews, order: number): (OrderPreviewData & { stati
   };
 }
 
-function text(value: number | null | undefined): string {
-  return value === null || value === undefined ? '—' : String(value);
+function text(value: string | undefined): string {
+  return value ?? '—';
 }
 
 /** Make every control that names an order a keyboard-usable button for it. */

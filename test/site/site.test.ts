@@ -23,6 +23,7 @@ import { pythonExactLeastSquares } from '../helpers/pythonExact.ts';
 import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
 import { checkHandbookJson } from './handbookJsonChecks.ts';
+import { describeNumbers } from './numberChecks.ts';
 import { describeReading } from './readingChecks.ts';
 import { serveDirectory } from './staticServer.ts';
 
@@ -541,3 +542,5 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
 describe.skipIf(!existsSync(CHROMIUM))('reading and reviewing (test/site/readingChecks.ts)', () => {
   describeReading(() => ({ siteRoot, base: BASE, correlations }));
 });
+
+describeNumbers(() => ({ outDir, correlations }));

@@ -5,21 +5,23 @@
  * curve rows and at most RESIDUAL_SAMPLE residuals per order, numbers rounded for drawing. The published order is
  * the page's own chart and is not repeated. Floating-point fits (exact certification off): a preview is a picture.
  */
-import { bands, fitPolynomial, type FitData } from '../../core/index.ts';
+import { bands, fitPolynomial, formatNumber, formatRSquared, type FitData } from '../../core/index.ts';
 import { evenGrid, roundForChart } from '../../render/index.ts';
 import { usedPoints, type CorrelationEntry, type OrderSelection, type PolynomialFit } from './entryView.ts';
 
 const SAMPLES = 30;
 const RESIDUAL_SAMPLE = 60;
 
+/** Statistics of one order as the page prints them (the order table's rules: formatNumber, formatRSquared). */
 export interface OrderStatistics {
-  readonly s: number | null;
-  readonly rSquared: number | null;
-  readonly adjustedRSquared: number | null;
-  readonly aicc: number | null;
-  readonly bic: number | null;
-  readonly looRmse: number | null;
-  readonly reducedChiSquare: number | null;
+  readonly s: string;
+  readonly rSquared: string;
+  readonly adjustedRSquared: string;
+  readonly aicc: string;
+  readonly bic: string;
+  readonly looRmse: string;
+  /** Weighted fits only. */
+  readonly reducedChiSquare?: string;
 }
 
 export interface OrderPreview {
@@ -45,13 +47,13 @@ export interface OrderPreviews {
 
 function statisticsOf(row: OrderSelection['orders'][number]): OrderStatistics {
   return {
-    s: roundForChart(row.residualStdDev ?? NaN, 5),
-    rSquared: roundForChart(row.rSquared ?? NaN, 7),
-    adjustedRSquared: roundForChart(row.adjustedRSquared ?? NaN, 7),
-    aicc: roundForChart(row.aicc ?? NaN, 6),
-    bic: roundForChart(row.bic, 6),
-    looRmse: roundForChart(row.looRmse, 5),
-    reducedChiSquare: roundForChart(row.reducedChiSquare ?? NaN, 5),
+    s: formatNumber(row.residualStdDev),
+    rSquared: formatRSquared(row.rSquared),
+    adjustedRSquared: formatRSquared(row.adjustedRSquared),
+    aicc: formatNumber(row.aicc, 5),
+    bic: formatNumber(row.bic, 5),
+    looRmse: formatNumber(row.looRmse),
+    ...(row.reducedChiSquare === null || row.reducedChiSquare === undefined ? {} : { reducedChiSquare: formatNumber(row.reducedChiSquare) }),
   };
 }
 
