@@ -16,6 +16,25 @@ function reasonOnce(reason: string, order: number): string {
   return reason.replace(new RegExp(`^Order ${order}(?:,|:)?\\s*(?:fixed by the author:\\s*)?`), '');
 }
 
+/** The polynomial in the other temperature scales (exact re-expression), where x is a temperature. */
+function temperatureScaleLines(record: CorrelationRecord): string[] {
+  const scales = record.temperatureScales;
+  if (scales === null) return [];
+  const lines = ['', `Other temperature scales (the same polynomial by exact substitution; fitted in ${scales.native}):`];
+  for (const form of scales.scales) {
+    if (form.native) continue;
+    lines.push(`  in ${form.scale}, valid for ${form.range.min} ${form.scale} ≤ x ≤ ${form.range.max} ${form.scale}:`);
+    if (!form.shown) {
+      lines.push(`    not shown: ${form.reason}`);
+      continue;
+    }
+    lines.push(`    ${form.equation}`);
+    lines.push(`    digits: ${form.significantDigits.join(', ')}; full precision: [${form.coefficients.map((a) => String(a)).join(', ')}]`);
+    lines.push(`    check values: ${form.printedCheckValues.map((check) => `x = ${check.x} → ${check.y} ± ${formatNumber(check.tolerance, 1)}`).join('; ')}`);
+  }
+  return lines;
+}
+
 export function fitReport(record: CorrelationRecord, fit: PolynomialFit, file: string): string {
   const s = fit.statistics;
   const unit = record.statisticUnit;
@@ -73,6 +92,7 @@ export function fitReport(record: CorrelationRecord, fit: PolynomialFit, file: s
     const printed = record.printedCheckValues[i];
     lines.push(`  x = ${pad(`${check.x}${xUnit}`, 18)} y = ${pad(`${printed ? `${printed.y} ± ${formatNumber(printed.tolerance, 1)}` : '—'}${yUnit}`, 40)} full precision: ${check.y}${yUnit}`);
   });
+  lines.push(...temperatureScaleLines(record));
   if (record.warnings.length) {
     lines.push('');
     lines.push('Warnings:');

@@ -56,8 +56,19 @@ export function powerFromMappedExact(mapped: readonly Rational[], map: DomainMap
  * @example mappedFromPowerExact([rational(-1n), rational(1n)], { center: 2, halfWidth: 1 }).map(toNumber) // => [1, 1]
  */
 export function mappedFromPowerExact(coefficients: readonly Rational[], map: DomainMap): Rational[] {
-  const c = decimalRational(map.center);
-  const h = decimalRational(map.halfWidth);
+  return substituteAffineExact(coefficients, decimalRational(map.center), decimalRational(map.halfWidth));
+}
+
+/**
+ * Exact coefficients of q(s) = p(offset + factor·s) from the exact coefficients of p: the substitution of an affine
+ * change of variable, c_j = Σ_{k≥j} a_k · C(k,j) · offset^(k−j) · factor^j (binomial expansion of (offset + factor·s)^k).
+ * The mapped form is the case offset = centre, factor = half-width; a change of temperature scale is another
+ * (x_K = x_°C + 273.15: offset 273.15, factor 1). Cost: O(m²) big-integer operations.
+ * @example substituteAffineExact([rational(0n), rational(1n)], rational(27315n, 100n), rational(1n)).map(toNumber) // => [273.15, 1]
+ */
+export function substituteAffineExact(coefficients: readonly Rational[], offset: Rational, factor: Rational): Rational[] {
+  const c = offset;
+  const h = factor;
   const size = coefficients.length;
   const m = size - 1;
   const denominator = coefficients[0]?.den ?? 1n;
@@ -78,10 +89,29 @@ export function mappedFromPowerExact(coefficients: readonly Rational[], map: Dom
       return rational(sum * h.num ** BigInt(j), denominator * cdPowers[m - j]! * h.den ** BigInt(j));
     });
   }
-  const matrix = Array.from({ length: size }, (_, j) =>
-    Array.from({ length: size }, (_, k) => (k < j ? rational(0n) : multiply(rational(binomial(k, j)), multiply(power(c, k - j), power(h, j))))),
+  return apply(substitutionMatrix(c, h, size), coefficients);
+}
+
+/** Matrix S (rows j, columns k) with c = S·a for q(s) = p(offset + factor·s): C(k,j)·offset^(k−j)·factor^j, k ≥ j. */
+function substitutionMatrix(offset: Rational, factor: Rational, size: number): Rational[][] {
+  return Array.from({ length: size }, (_, j) =>
+    Array.from({ length: size }, (_, k) => (k < j ? rational(0n) : multiply(rational(binomial(k, j)), multiply(power(offset, k - j), power(factor, j))))),
   );
-  return apply(matrix, coefficients);
+}
+
+/**
+ * Covariance of the coefficients of q(s) = p(offset + factor·s) given the covariance of p's: S·Σ·Sᵀ in floating
+ * point (a diagnostic, not a certified value), with S exact and rounded once per entry.
+ * @example substitutedCovariance([[1, 0], [0, 1]], rational(0n), rational(2n)) // => [[1, 0], [0, 4]]
+ */
+export function substitutedCovariance(covariance: readonly (readonly number[])[], offset: Rational, factor: Rational): number[][] {
+  return congruence(substitutionMatrix(offset, factor, covariance.length).map((row) => row.map(toNumber)), covariance);
+}
+
+/** T·Σ·Tᵀ in floating point. */
+function congruence(T: readonly (readonly number[])[], covariance: readonly (readonly number[])[]): number[][] {
+  const temp = T.map((row) => covariance[0]!.map((_, l) => row.reduce((sum, value, j) => sum + value * covariance[j]![l]!, 0)));
+  return temp.map((row) => T.map((other) => row.reduce((sum, value, l) => sum + value * other[l]!, 0)));
 }
 
 /**
@@ -98,7 +128,5 @@ export function mappedToPower(mapped: readonly number[], map: DomainMap): number
  * @example mappedCovarianceToPower([[1, 0], [0, 1]], { center: 0, halfWidth: 2 }) // => [[1, 0], [0, 0.25]]
  */
 export function mappedCovarianceToPower(covariance: readonly (readonly number[])[], map: DomainMap): number[][] {
-  const T = powerFromMappedMatrix(map, covariance.length).map((row) => row.map(toNumber));
-  const temp = T.map((row) => covariance[0]!.map((_, l) => row.reduce((sum, value, j) => sum + value * covariance[j]![l]!, 0)));
-  return temp.map((row) => T.map((other) => row.reduce((sum, value, l) => sum + value * other[l]!, 0)));
+  return congruence(powerFromMappedMatrix(map, covariance.length).map((row) => row.map(toNumber)), covariance);
 }

@@ -29,7 +29,7 @@ import { checkPoints, fullCheckValues, printedForm } from './checkValues.ts';
 import { mappedCovarianceToPower, mappedFromPowerExact, mappedToPower } from './convertBasis.ts';
 import { chiSquareUpperP, normalQuantile, tQuantile } from './distributions.ts';
 import { evaluateFit, horner } from './evaluate.ts';
-import { toNumber } from './exact/rational.ts';
+import { fromDouble, toNumber } from './exact/rational.ts';
 import { localUncertainty, uncertaintyProfile } from './stats/localUncertainty.ts';
 import { exactLeastSquares } from './exact/exactLeastSquares.ts';
 import { FitError } from './fitError.ts';
@@ -39,6 +39,7 @@ import { lackOfFit } from './stats/lackOfFit.ts';
 import { residualStatistics, totalSumOfSquares } from './stats/residualStatistics.ts';
 import { runsTest } from './stats/runsTest.ts';
 import { fittedSpaceWeights, forwardX, forwardY, inverseX, inverseY, transformData } from './transforms.ts';
+import { temperatureScales } from './temperature/temperatureScales.ts';
 import { validateFitInput } from './validateFitInput.ts';
 import type { FitData, FitOptions, PolynomialFit } from './types.ts';
 
@@ -183,6 +184,17 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   if (refinement === 'none' && options.exact !== 'off') {
     warnings.push('exact certification failed; the floating-point solution is reported');
   }
+  // x is a temperature and untransformed: the same polynomial in every scale, by exact substitution.
+  const scales =
+    options.temperatureScale !== undefined && transformX === 'identity'
+      ? temperatureScales({
+          scale: options.temperatureScale,
+          exactCoefficients: exactCoefficients ?? coefficients.map(fromDouble),
+          fit: { coefficients, covariance, standardErrors, significantDigits: printed.digits, printedCoefficients: printed.printed, checkValues, printedCheckValues: printed.checkValues, range, mapped: partial.mapped },
+          transformY,
+          tolerance: digitTolerance,
+        })
+      : null;
 
   return {
     order,
@@ -246,5 +258,6 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
     },
     method: { solver: 'householder-qr', refinement, rank: parameters },
     warnings,
+    temperatureScales: scales,
   };
 }

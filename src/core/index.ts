@@ -12,7 +12,11 @@ export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';
 export { transformDomainProblem } from './transformDomainProblem.ts';
 export { domainMap, domainMapFor, roundToPlace, roundUpShort, shortDecimal, toUnit } from './domain.ts';
-export { mappedToPower, mappedCovarianceToPower, mappedFromPowerExact, powerFromMappedExact } from './convertBasis.ts';
+export { mappedToPower, mappedCovarianceToPower, mappedFromPowerExact, powerFromMappedExact, substituteAffineExact, substitutedCovariance } from './convertBasis.ts';
+
+// Temperature scales (exact re-expression of a fit in K, °C and °F)
+export { applyMap, inverseMap, scaleConversion, temperatureScaleOf, TEMPERATURE_SCALES, type AffineMap } from './temperature/temperatureScale.ts';
+export { temperatureScales, SHOWN_DIGITS_LIMIT, type NativeForm } from './temperature/temperatureScales.ts';
 
 // Exact arithmetic (certification)
 export { add, compare, divide, fromDouble, gcd, multiply, rational, reduce, subtract, timesPowerOfTen, toNumber, type Rational } from './exact/rational.ts';

@@ -61,6 +61,48 @@ export interface FitOptions {
    * transform's own rounding, half an ulp, is then part of the data). 'off' keeps the floating-point solution.
    */
   readonly exact?: 'auto' | 'off';
+  /**
+   * The temperature scale x is measured in, when x is a temperature (K, °C or °F). With an untransformed x the fit
+   * then carries the polynomial re-expressed in every scale (temperatureScales); otherwise it is ignored.
+   */
+  readonly temperatureScale?: TemperatureScale | undefined;
+}
+
+/** A temperature scale x may be measured in. */
+export type TemperatureScale = 'K' | '°C' | '°F';
+
+/** The fitted polynomial expressed in one temperature scale (see temperature/temperatureScales.ts). */
+export interface TemperatureScaleForm {
+  readonly scale: TemperatureScale;
+  /** True for the scale the data were fitted in. */
+  readonly native: boolean;
+  /** Validity range in this scale (the native range converted exactly, rounded once). */
+  readonly range: { readonly min: number; readonly max: number };
+  /** Ascending power-basis coefficients in x of this scale: exact substitution of the certified ones, rounded once. */
+  readonly coefficients: readonly number[];
+  readonly significantDigits: readonly number[];
+  readonly printedCoefficients: readonly string[];
+  /** Standard errors of the coefficients in this scale (floating-point transform of the covariance). */
+  readonly standardErrors: readonly number[];
+  readonly checkValues: readonly CheckValue[];
+  readonly printedCheckValues: readonly PrintedCheckValue[];
+  /** The mapped form's centre and half-width in this scale (its coefficients are the native ones). */
+  readonly mapped: { readonly center: number; readonly halfWidth: number };
+  /**
+   * Largest deviation of the printed coefficients, evaluated by Horner's rule in double precision, from the certified
+   * fit over the range, in units of the digits rule's tolerance (1 % of the uncertainty of a new observation).
+   */
+  readonly printedDeviation: number;
+  /** Whether the printed form in this scale is published (always for the native scale). */
+  readonly shown: boolean;
+  /** Why it is not shown, or null. */
+  readonly reason: string | null;
+}
+
+/** The fitted polynomial in every temperature scale: the native one first. */
+export interface TemperatureScales {
+  readonly native: TemperatureScale;
+  readonly scales: readonly TemperatureScaleForm[];
 }
 
 /** Affine map from the fitted-space variable u to t = (u − center) / halfWidth. */
@@ -226,4 +268,6 @@ export interface PolynomialFit {
     readonly rank: number;
   };
   readonly warnings: readonly string[];
+  /** The polynomial in every temperature scale, when x is a temperature and untransformed; null otherwise. */
+  readonly temperatureScales?: TemperatureScales | null;
 }

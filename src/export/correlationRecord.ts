@@ -47,6 +47,13 @@
  *   provenance           {source, uncertainty, review, excluded}
  *   method               {solver, refinement, rank}
  *   warnings             warnings of the order selection and the fit
+ *   temperatureScales    null unless x is a temperature (unit K, °C or °F) and untransformed; then
+ *                        {native, scales: [{scale, native, shown, reason, range {min, max, unit}, coefficients,
+ *                        printedCoefficients, significantDigits, standardErrors, equation, mapped {center, halfWidth},
+ *                        checkValues, printedCheckValues, printedDeviation}]}: the polynomial in every scale, native
+ *                        first, by exact substitution of the certified coefficients (src/core/temperature/); shown is
+ *                        false (and reason says why) where the printed form would not reproduce the fit within 1 %
+ *                        of the uncertainty of a new observation; the mapped coefficients are the same in every scale
  *
  * @example correlationRecord(source).coefficients // => [13.88923908187224, -2422.7009638645936, -145306.4927312025]
  */
@@ -81,6 +88,31 @@ export interface CorrelationSource {
 
 /** Version of the record's layout; raised only when a field changes meaning. */
 export const RECORD_VERSION = 1;
+
+/** The temperatureScales field: every scale's form with its equation as printed, or null. */
+function temperatureScalesRecord(fit: PolynomialFit, symbols: { x: string; y: string }) {
+  const scales = fit.temperatureScales;
+  if (scales === undefined || scales === null) return null;
+  return {
+    native: scales.native,
+    scales: scales.scales.map((form) => ({
+      scale: form.scale,
+      native: form.native,
+      shown: form.shown,
+      reason: form.reason,
+      range: { min: form.range.min, max: form.range.max, unit: form.scale },
+      coefficients: form.coefficients,
+      printedCoefficients: form.printedCoefficients,
+      significantDigits: form.significantDigits,
+      standardErrors: form.native ? fit.standardErrors.map((value, k) => (k === 0 && !fit.intercept ? NaN : value)) : form.standardErrors,
+      equation: form.native ? equationPlain(fit, symbols) : equationPlain({ ...fit, intercept: true, coefficients: form.coefficients, significantDigits: form.significantDigits }, symbols),
+      mapped: form.mapped,
+      checkValues: form.checkValues,
+      printedCheckValues: form.printedCheckValues,
+      printedDeviation: form.printedDeviation,
+    })),
+  };
+}
 
 /** The record as plain JSON data. */
 export function correlationRecord(source: CorrelationSource) {
@@ -154,6 +186,7 @@ export function correlationRecord(source: CorrelationSource) {
     },
     method: fit.method,
     warnings: [...(selection?.warnings ?? []), ...fit.warnings],
+    temperatureScales: temperatureScalesRecord(fit, { x, y }),
   };
   return jsonNumbers(record) as Jsonified<typeof record>;
 }

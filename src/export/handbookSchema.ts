@@ -24,6 +24,40 @@ const quantity = {
   properties: { name: text, symbol: text, unit: text },
 } as const;
 
+const checkValue = { type: 'object', required: ['x', 'y'], properties: { x: number, y: number, tolerance: numberOrNull } } as const;
+const printedCheckValue = { type: 'object', required: ['x', 'y', 'tolerance'], properties: { x: number, y: text, tolerance: number } } as const;
+const scale = { enum: ['K', '°C', '°F'] } as const;
+
+const temperatureScaleForm = {
+  type: 'object',
+  description:
+    'The polynomial in one temperature scale: exact substitution of the certified coefficients (x_K = x_°C + 273.15, x_°F = 9/5·x_°C + 32), each coefficient rounded once. Its mapped form has the native mapped coefficients with this centre and half-width.',
+  required: ['scale', 'native', 'shown', 'reason', 'range', 'coefficients', 'printedCoefficients', 'significantDigits', 'standardErrors', 'equation', 'mapped', 'checkValues', 'printedCheckValues', 'printedDeviation'],
+  properties: {
+    scale,
+    native: { type: 'boolean', description: 'True for the scale the data were fitted in (its fields equal the top-level ones).' },
+    shown: { type: 'boolean', description: 'Whether the printed form is published: its printed coefficients, evaluated in double precision, reproduce the fit within 1 % of the uncertainty of a new observation over the range, with at most 15 significant digits.' },
+    reason: { ...textOrNull, description: 'Why the printed form is not shown (use the mapped form with x converted to the native scale), or null.' },
+    range: { type: 'object', required: ['min', 'max', 'unit'], properties: { min: number, max: number, unit: scale }, description: 'Validity range in this scale.' },
+    coefficients: { ...numbers, description: 'Ascending power-basis coefficients in x of this scale, full precision.' },
+    printedCoefficients: { type: 'array', items: text, description: 'The coefficients as printed, to significantDigits.' },
+    significantDigits: { type: 'array', items: { type: 'integer', minimum: 1 }, description: 'Digits needed per coefficient by the digits rule.' },
+    standardErrors: { type: 'array', items: numberOrNull, description: 'Standard errors of the coefficients in this scale.' },
+    equation: { ...text, description: 'The printed equation as plain text, x in this scale.' },
+    mapped: { type: 'object', required: ['center', 'halfWidth'], properties: { center: number, halfWidth: { type: 'number', exclusiveMinimum: 0 } }, description: 'Centre and half-width of the mapped variable in this scale.' },
+    checkValues: { type: 'array', items: checkValue, description: 'y at check points of this scale from the full-precision coefficients (exact evaluation, rounded once).' },
+    printedCheckValues: { type: 'array', items: printedCheckValue, description: 'y from the printed coefficients, to the digits a correct copy reproduces, with tolerance.' },
+    printedDeviation: { ...numberOrNull, description: 'Largest deviation of the printed form in double precision from the fit, in units of 1 % of the uncertainty of a new observation (≤ 1 when shown).' },
+  },
+} as const;
+
+const temperatureScales = {
+  type: ['object', 'null'],
+  description: 'Null unless x is a temperature (unit K, °C or °F) and is not transformed; then the polynomial in every scale, the native one first.',
+  required: ['native', 'scales'],
+  properties: { native: scale, scales: { type: 'array', minItems: 3, maxItems: 3, items: temperatureScaleForm } },
+} as const;
+
 const correlation = {
   type: 'object',
   description:
@@ -82,8 +116,9 @@ const correlation = {
       type: 'array',
       minItems: 1,
       description: 'Values to check a copied implementation against: y at x from the full-precision coefficients.',
-      items: { type: 'object', required: ['x', 'y'], properties: { x: number, y: number, tolerance: numberOrNull } },
+      items: checkValue,
     },
+    temperatureScales,
     downloads: {
       type: 'object',
       description: 'Kind of download → path inside the site (base path included).',

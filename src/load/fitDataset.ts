@@ -2,7 +2,7 @@
  * Fit a validated correlation: choose the order (or take the fixed one), then fit it with the pass-through
  * constraints. Core failures become file messages: a FitError naming a point points at that point's data line.
  */
-import { FitError, fitPolynomial, selectOrder, type FitData, type OrderSelection, type PolynomialFit } from '../core/index.ts';
+import { FitError, fitPolynomial, selectOrder, temperatureScaleOf, type FitData, type OrderSelection, type PolynomialFit } from '../core/index.ts';
 import { error, warning, type Diagnostic } from './diagnostic.ts';
 import type { LoadedCorrelation } from './types.ts';
 
@@ -63,6 +63,8 @@ export function fitDataset(correlation: LoadedCorrelation): DatasetFit {
       uncertaintyScale: fitSettings.criterion === 'chiSquare' ? 'stated' : 'scatter',
       // A relative uncertainty stated in the metadata is the model of the local uncertainty of a weighted fit.
       ...(fitSettings.weights === 'uncertainty' && correlation.meta.uncertainty?.relative !== undefined ? { uncertaintyModel: { relative: correlation.meta.uncertainty.relative } } : {}),
+      // x in K, °C or °F: the fit also carries its polynomial in the other two scales (exact substitution).
+      temperatureScale: temperatureScaleOf(correlation.meta.variable.unit) ?? undefined,
     });
   } catch (caught) {
     if (caught instanceof FitError) diagnostics.push(fitErrorDiagnostic(correlation, caught));

@@ -110,6 +110,25 @@ describe('correlary fit bad input', () => {
     expect(named.stderr).toMatch(/noheader\.csv:1:1: no header row: the first row holds numbers/);
   });
 
+  it('correlary fit --x-unit °C reports the other temperature scales, and --json carries them', async () => {
+    // y = 2 + 0.5·t exactly in °C; computed by hand: y = 2 + 0.5·(T − 273.15) = 0.5·T − 134.575 in K and
+    // y = 2 + 0.5·5/9·(F − 32) = 5/18·F − 62/9 in °F, so at 212 °F (100 °C) y = 52.
+    const file = csvFile('celsius.csv', 't,y\n0,2\n20,12\n40,22\n60,32\n80,42\n100,52\n');
+    const report = await runCli(['fit', file, '--order', '1', '--x-unit', '°C']);
+    expect(report.code, report.stderr).toBe(0);
+    expect(report.stdout).toMatch(/Other temperature scales \(the same polynomial by exact substitution; fitted in °C\)/);
+    expect(report.stdout).toMatch(/in K, valid for 273\.15 K ≤ x ≤ 373\.15 K:\n {4}y = -134\.575 \+ 0\.5\*x/);
+    const { stdout } = await runCli(['fit', file, '--order', '1', '--x-unit', '°C', '--json']);
+    const record = JSON.parse(stdout);
+    expect(record.temperatureScales.native).toBe('°C');
+    const fahrenheit = record.temperatureScales.scales.find((form: { scale: string }) => form.scale === '°F');
+    expect(fahrenheit.range).toEqual({ min: 32, max: 212, unit: '°F' });
+    expect(fahrenheit.checkValues.at(-1)).toMatchObject({ x: 212, y: 52 });
+    // Not a temperature: no scales.
+    const plain = JSON.parse((await runCli(['fit', file, '--order', '1', '--x-unit', 'm', '--json'])).stdout);
+    expect(plain.temperatureScales).toBeNull();
+  });
+
   it('correlary fit reports a missing file in one line', async () => {
     const { code, stderr } = await runCli(['fit', join(dir, 'nope.csv')]);
     expect(code).toBe(1);

@@ -35,6 +35,19 @@ describe('handbookJson(input)', () => {
     expect(json.correlations[0]!.url).toBe('/hb/correlations/liquid-a/');
   });
 
+  it('carries temperatureScales where x is a temperature: three scales, native first, valid against the schema', async () => {
+    const json = handbookJson(await fixtureInput());
+    const scales = json.correlations[0]!.temperatureScales;
+    expect(scales?.scales.map((form) => form.scale)).toEqual([scales!.native, ...['K', '°C', '°F'].filter((name) => name !== scales!.native)]);
+    expect(scales?.scales[0]!.coefficients).toEqual(json.correlations[0]!.coefficients);
+    const validate = validator();
+    const copy = JSON.parse(JSON.stringify(json));
+    copy.correlations[0].temperatureScales.scales[1].scale = 'R';
+    expect(validate(copy)).toBe(false);
+    copy.correlations[0].temperatureScales = null;
+    expect(validate(copy), JSON.stringify(validate.errors)).toBe(true);
+  });
+
   it('HANDBOOK_SCHEMA rejects a correlation without coefficients, with an unknown status or with a relative download path', async () => {
     const json = JSON.parse(JSON.stringify(handbookJson(await fixtureInput())));
     const validate = validator();

@@ -50,7 +50,7 @@ export async function checkHandbookJson(outDir: string, content: string, base: s
     const { code, stdout, stderr } = await runCli(['fit', path.join(content, slug), '--json']);
     expect(code, stderr).toBe(0);
     const cli = JSON.parse(stdout) as Record<string, unknown>;
-    for (const key of ['order', 'coefficients', 'standardErrors', 'mapped', 'transforms', 'range', 'residualStdDev', 'n', 'checkValues', 'cautions', 'property', 'variable', 'material', 'title', 'status']) {
+    for (const key of ['order', 'coefficients', 'standardErrors', 'mapped', 'transforms', 'range', 'residualStdDev', 'n', 'checkValues', 'cautions', 'property', 'variable', 'material', 'title', 'status', 'temperatureScales']) {
       expect(item[key], `${slug}: ${key}`).toEqual(cli[key]);
     }
     (item['coefficients'] as number[]).forEach((value, k) => expect(Object.is(value, (cli['coefficients'] as number[])[k]), `${slug} a${k}`).toBe(true));
