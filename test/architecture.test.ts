@@ -2,7 +2,8 @@
  * Layering rules (DEVELOPERS.md): the numerical core is pure (no Astro, no Node built-ins, no DOM, no file I/O)
  * and the schemas import only zod; the chart renderer (src/render) is pure too: d3-scale, d3-shape and the core's door
  * only, so that it runs in the CLI, at build time and in the browser alike. A file that breaks the rule fails here
- * with its import named.
+ * with its import named. Browser code reaches the core only through src/core/browser.ts, a door to its
+ * dependency-free evaluation (the full door would bundle the fitting code and the distributions).
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
@@ -68,6 +69,29 @@ describe('architecture', () => {
       }
       if (DOM_GLOBALS.test(readFileSync(file, 'utf8'))) offenders.push(`${relative(root, file)} uses a DOM global`);
     }
+    expect(offenders).toEqual([]);
+  });
+
+  it('src/client reaches src/core only through its browser door, src/core/browser.ts, whose every file imports no package', () => {
+    const offenders: string[] = [];
+    for (const file of sourceFiles(join(root, 'src/client'))) {
+      for (const spec of importsOf(file)) {
+        if (spec.includes('core/') && spec !== '../core/browser.ts') offenders.push(`${relative(root, file)} imports ${spec}`);
+      }
+    }
+    // Every file the browser door reaches, followed through relative imports: no ml-matrix, no @stdlib.
+    const seen = new Set<string>();
+    const pending = [join(root, 'src/core/browser.ts')];
+    while (pending.length > 0) {
+      const file = pending.pop()!;
+      if (seen.has(file)) continue;
+      seen.add(file);
+      for (const spec of importsOf(file)) {
+        if (spec.startsWith('.')) pending.push(resolve(dirname(file), spec));
+        else offenders.push(`${relative(root, file)} (reached from src/core/browser.ts) imports ${spec}`);
+      }
+    }
+    expect(seen.size).toBeGreaterThan(3);
     expect(offenders).toEqual([]);
   });
 

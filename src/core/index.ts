@@ -33,6 +33,7 @@ export * from './order/index.ts';
 export { evaluateFit, basisAt, horner, type Evaluation } from './evaluate.ts';
 export { bands, type BandPoint } from './stats/bands.ts';
 export { localUncertainty, profileAt, uncertaintyProfile } from './stats/localUncertainty.ts';
+export { publishedEstimate, intervalHalfWidths, type PublishedEstimate, type PublishedModel } from './stats/publishedEstimate.ts';
 export { runsTest } from './stats/runsTest.ts';
 export { checkPoints, exactU, fullCheckValues, lastPrintedPlace, printedForm, type PrintedForm } from './checkValues.ts';
 

@@ -12,6 +12,7 @@
  */
 import { normalQuantile, tQuantile } from '../distributions.ts';
 import { localUncertainty } from './localUncertainty.ts';
+import { intervalHalfWidths } from './publishedEstimate.ts';
 import { basisAt, evaluateFit } from '../evaluate.ts';
 import { inverseY } from '../transforms.ts';
 import type { PolynomialFit } from '../types.ts';
@@ -38,14 +39,9 @@ export function bands(
   const dof = fit.statistics.degreesOfFreedom;
   const quantile = fit.uncertaintyScale === 'stated' ? normalQuantile((1 + confidence) / 2) : dof > 0 ? tQuantile((1 + confidence) / 2, dof) : NaN;
   return xs.map((x) => {
-    const newPointVariance = localUncertainty(fit, x) ** 2;
+    const newPointSd = localUncertainty(fit, x);
     const evaluation = evaluateFit(fit, x, { extrapolate: options.extrapolate ?? false });
-    const phi = basisAt(fit, x);
-    let varFit = 0;
-    const cov = fit.mapped.covariance;
-    for (let j = 0; j < phi.length; j++) for (let k = 0; k < phi.length; k++) varFit += phi[j]! * cov[j]![k]! * phi[k]!;
-    const ci = quantile * Math.sqrt(Math.max(0, varFit));
-    const pi = quantile * Math.sqrt(Math.max(0, varFit) + newPointVariance);
+    const { confidence: ci, prediction: pi } = intervalHalfWidths(basisAt(fit, x), fit.mapped.covariance, quantile, newPointSd);
     const v = evaluation.fittedSpace;
     return {
       x,
