@@ -24,6 +24,7 @@ import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '.
 import { buildSite, projectRoot } from './buildSite.ts';
 import { checkHandbookJson } from './handbookJsonChecks.ts';
 import { describeNumbers } from './numberChecks.ts';
+import { describeEvaluator } from './evaluatorChecks.ts';
 import { describeReading } from './readingChecks.ts';
 import { serveDirectory } from './staticServer.ts';
 
@@ -391,17 +392,27 @@ describe('the browser only draws', () => {
     }
   });
 
-  it('src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, minisearch, the shared renderer and its own files', async () => {
+  it("src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, minisearch, the shared renderer, the core's browser door and its own files", async () => {
     const directory = path.join(projectRoot, 'src', 'client');
     const offenders: string[] = [];
     for (const name of await readdir(directory)) {
       const text = await readFile(path.join(directory, name), 'utf8');
       for (const match of text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
         const spec = (match[1] ?? match[2])!;
-        if (!(spec.startsWith('./') || spec.startsWith('../render/') || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom', 'minisearch'].includes(spec))) offenders.push(`${name} imports ${spec}`);
+        if (!(spec.startsWith('./') || spec.startsWith('../render/') || spec === '../core/browser.ts' || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom', 'minisearch'].includes(spec))) offenders.push(`${name} imports ${spec}`);
       }
     }
     expect(offenders).toEqual([]);
+  });
+
+  it('the evaluator is built by script only: no page carries a form that cannot work without scripts, and each carries what it reads', async () => {
+    for (const correlation of correlations) {
+      const html = await page(correlation.slug);
+      expect(html, correlation.slug).not.toContain('evaluator-x');
+      const { transform } = correlation.meta.fit;
+      expect(html, correlation.slug).toContain(`data-evaluator data-transform-x="${transform.x}" data-transform-y="${transform.y}"`);
+      expect(html, correlation.slug).toContain('<code id="snippet-javascript"');
+    }
   });
 
   it('the built browser scripts hold none of the numerical core', async () => {
@@ -410,9 +421,12 @@ describe('the browser only draws', () => {
     expect(scripts.length).toBeGreaterThan(0);
     for (const name of scripts) {
       const text = await readFile(path.join(assets, name), 'utf8');
-      // String literals of the core survive minification: the solver tag and the range guard's message.
+      // String literals of the core survive minification: the solver tag, the range guard's message of evaluateFit
+      // (the browser evaluates through publishedEstimate, src/core/browser.ts) and a tag of the
+      // distribution functions' incomplete-gamma code (@stdlib).
       expect(text, name).not.toContain('householder-qr');
       expect(text, name).not.toContain('outside the fitted range');
+      expect(text, name).not.toContain('gammaincinv');
     }
   });
 });
@@ -544,3 +558,6 @@ describe.skipIf(!existsSync(CHROMIUM))('reading and reviewing (test/site/reading
 });
 
 describeNumbers(() => ({ outDir, correlations }));
+describe.skipIf(!existsSync(CHROMIUM))('the evaluator and the copy buttons (test/site/evaluatorChecks.ts)', () => {
+  describeEvaluator(() => ({ siteRoot, outDir, base: BASE, correlations }));
+});

@@ -24,7 +24,7 @@ const HALF_WIDTH = ${literal(m.halfWidth!)};
 /** Mapped coefficients b_0..b_m and their covariance. */
 const B = ${list(m.coefficients.map((value) => value ?? 0))};
 const COVARIANCE = [
-  ${m.covariance.map((row) => list(row.map((value) => value ?? 0))).join(',\n  ')},
+  ${m.covariance.map((row) => list(row.map((value) => value ?? 0))).join(',\n  ')}
 ];
 const QUANTILE = ${Number.isFinite(source.quantile) ? literal(source.quantile) : 'NaN'};
 const NOISE_X = ${list(source.profileX)};
