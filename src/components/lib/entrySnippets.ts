@@ -27,7 +27,7 @@ export interface EntrySnippet {
 /** File names only (cheap): kind → file. */
 export function snippetFiles(slug: string): Record<string, string> {
   const name = snippetIdentifier(slug);
-  return { python: `${name}.py`, javascript: `${name}.mjs`, typescript: `${name}.d.ts`, c: `${name}.h`, spreadsheet: `${name}.formula.txt` };
+  return { python: `${name}.py`, javascript: `${name}.mjs`, typescript: `${name}.d.mts`, c: `${name}.h`, spreadsheet: `${name}.formula.txt` };
 }
 
 /** @throws Error when the entry has no fit */

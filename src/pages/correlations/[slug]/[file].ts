@@ -1,5 +1,5 @@
 /**
- * `/correlations/<slug>/<name>.py|.mjs|.d.ts|.h|.formula.txt`: the code snippets of one correlation
+ * `/correlations/<slug>/<name>.py|.mjs|.d.mts|.h|.formula.txt`: the code snippets of one correlation
  * (src/export/snippets), each carrying the range guard, the check values and the cautions.
  */
 import type { APIRoute, GetStaticPaths } from 'astro';
