@@ -2,13 +2,13 @@
  * Preview another order on the page's chart: its curve, prediction band and residuals beside the published fit,
  * and its statistics beside the published ones. Chosen by a button, a point of the statistics plot or a row of
  * the order table (mouse, or Enter/Space on the focused control); "Back to the published order" clears it.
- * Everything shown was computed at build time (src/components/lib/orderPreviews.ts).
+ * Everything shown was computed at build time (src/render/orderPreviews.ts, stored with the fit by the loader).
  */
 import { chartScales } from '../render/chartScales.ts';
 import type { OrderPreviewData } from './fitChart.ts';
 import { chartsReady } from './mountFitCharts.ts';
 
-/** The build-time previews (src/components/lib/orderPreviews.ts): x shared, values per order. */
+/** The build-time previews (src/render/orderPreviews.ts, stored with the fit by the loader): x shared, values per order. */
 interface Previews {
   readonly published: number;
   readonly grid: readonly number[];

@@ -7,6 +7,7 @@ export type * from './types.ts';
 
 // Fitting
 export { fitPolynomial } from './fitPolynomial.ts';
+export { fitCurve } from './fitCurve.ts';
 export { fitOrders, type OrderFit } from './fitOrders.ts';
 export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';

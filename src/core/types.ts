@@ -271,3 +271,18 @@ export interface PolynomialFit {
   /** The polynomial in every temperature scale, when x is a temperature and untransformed; null otherwise. */
   readonly temperatureScales?: TemperatureScales | null;
 }
+
+/**
+ * What a confidence or prediction band needs of a fit (stats/bands.ts): the mapped form, the transforms, the
+ * range, the uncertainty model and s with its degrees of freedom. A PolynomialFit is one; so is a CurveFit.
+ */
+export type BandFit = Pick<
+  PolynomialFit,
+  'order' | 'transformX' | 'transformY' | 'mapped' | 'range' | 'confidence' | 'uncertaintyScale' | 'uncertaintyProfile' | 'uncertaintyModel'
+> & { readonly statistics: Pick<FitStatistics, 'residualStdDev' | 'degreesOfFreedom'> };
+
+/** The floating-point fit of one order as a picture needs it (fitCurve): its bands and its residuals, nothing certified. */
+export interface CurveFit extends BandFit {
+  /** y − ŷ at each point, in y's own unit, in input order. */
+  readonly residualsOriginal: readonly number[];
+}

@@ -1,13 +1,15 @@
 /**
- * On-disk fit cache: the result of fitDataset for one correlation, stored as a JSON file named by a SHA-256 key of
- * everything the result depends on: the points used (x, y, uncertainty, data-file lines), the fit options, the
- * validity range, the file paths and metadata positions that its messages name, and the fitting code's version
- * (fitCodeVersion). Unchanged datasets are read back instead of refitted; a changed one gets a new key. The key
- * never depends on time or machine, so two builds of the same content produce the same files.
+ * On-disk fit cache: the result of fitDataset for one correlation, with what the pages derive from it once per
+ * dataset (the previews of the other orders) and the data rows they show, stored as a JSON file named by a SHA-256
+ * key of everything the record depends on: every data row (row, line, x, y, uncertainty, note), the points used,
+ * the fit options, the validity range, the file paths and metadata positions that its messages name, and the
+ * fitting code's version (fitCodeVersion). Unchanged datasets are read back instead of refitted; a changed one
+ * gets a new key. The key never depends on time or machine, so two builds of the same content produce the same
+ * files.
  *
  * The same files serve the built pages: the site's content store keeps only a reference (directory and key) and
- * pages read the fit and its order table from here (readCachedFit), which keeps Astro's store, and the JavaScript
- * module Astro bundles it into, small.
+ * pages read the fit, its order table, the previews and the data rows from here (src/load/storedFit.ts), which
+ * keeps Astro's store, and the JavaScript module Astro bundles it into, small.
  *
  * JSON has no NaN, ±Infinity or −0; they are written as {"$number": "NaN"} and restored on reading, so a cached
  * fit equals a fresh one.
@@ -15,8 +17,21 @@
 import { createHash } from 'node:crypto';
 import { mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
+import type { OrderPreviews } from '../render/orderPreviews.ts';
+import type { DataPoint } from '../schema/index.ts';
 import type { DatasetFit } from './fitDataset.ts';
 import type { LoadedCorrelation } from './types.ts';
+
+/** One cache file: the dataset's fit, the previews of its other orders, and every data row (for the pages). */
+export interface CachedFit extends DatasetFit {
+  /** Every data row, in file order (what the page's data table and data.csv show). */
+  readonly points: readonly DataPoint[];
+  /** Previews of the orders not published (src/render/orderPreviews.ts), or null. */
+  readonly previews: OrderPreviews | null;
+}
+
+/** Bumped when the layout of a cache file changes. */
+const CACHE_FORMAT = 2;
 
 /** Where fits are cached and under which code version. */
 export interface FitCache {
@@ -46,9 +61,9 @@ export function toCacheJson(value: unknown): string {
   return JSON.stringify(value, replacer);
 }
 
-/** The value back from toCacheJson's text. */
+/** The value back from toCacheJson's text. Text without a tagged number is parsed without a reviver (fast path). */
 export function fromCacheJson(text: string): unknown {
-  return JSON.parse(text, reviver);
+  return text.includes(`"${NUMBER_TAG}"`) ? JSON.parse(text, reviver) : JSON.parse(text);
 }
 
 /**
@@ -58,7 +73,9 @@ export function fromCacheJson(text: string): unknown {
  */
 export function fitCacheKey(correlation: LoadedCorrelation, version: string): string {
   const inputs = {
+    format: CACHE_FORMAT,
     version,
+    points: correlation.points.map((point) => [point.row, point.line, point.x, point.y, point.uncertainty ?? null, point.note ?? null]),
     used: correlation.used.map((point) => [point.x, point.y, point.uncertainty ?? null, point.line]),
     fit: correlation.meta.fit,
     range: correlation.range,
@@ -73,8 +90,8 @@ function fileOf(directory: string, key: string): string {
   return path.join(directory, `${key}.json`);
 }
 
-/** The cached fit under `key`, or undefined when there is none (or it cannot be read). */
-export function readCachedFit(directory: string, key: string): DatasetFit | undefined {
+/** The cached record under `key`, or undefined when there is none (or it cannot be read). */
+export function readCachedFit(directory: string, key: string): CachedFit | undefined {
   let text: string;
   try {
     text = readFileSync(fileOf(directory, key), 'utf8');
@@ -82,14 +99,14 @@ export function readCachedFit(directory: string, key: string): DatasetFit | unde
     return undefined;
   }
   try {
-    return fromCacheJson(text) as DatasetFit;
+    return fromCacheJson(text) as CachedFit;
   } catch {
     return undefined; // a damaged file is refitted and rewritten
   }
 }
 
-/** Store a fit under `key`; written to a temporary name and renamed, so a reader never sees half a file. */
-export function writeCachedFit(directory: string, key: string, fitted: DatasetFit): void {
+/** Store a record under `key`; written to a temporary name and renamed, so a reader never sees half a file. */
+export function writeCachedFit(directory: string, key: string, fitted: CachedFit): void {
   mkdirSync(directory, { recursive: true });
   const target = fileOf(directory, key);
   const temporary = `${target}.${process.pid}.tmp`;

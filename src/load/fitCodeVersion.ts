@@ -1,6 +1,7 @@
 /**
  * The version of the fitting code, for the fit cache's keys: SHA-256 of the package version and of every source
- * file of the numerical core and of the dataset fit (src/core/**, src/load/fitDataset.ts) under the package root,
+ * file of the numerical core, of the dataset fit and of the previews stored with it (src/core/**,
+ * src/load/fitDataset.ts, src/load/fitHandbook.ts, src/render/**) under the package root,
  * so that a changed core never serves a stale fit, even without a new version number. Where the sources are not
  * present (a compiled install), the package version alone.
  */
@@ -31,7 +32,12 @@ export function fitCodeVersion(packageRoot: string): string {
   } catch {
     hash.update('unknown');
   }
-  const files = [...sourceFiles(path.join(packageRoot, 'src', 'core')), path.join(packageRoot, 'src', 'load', 'fitDataset.ts')];
+  const files = [
+    ...sourceFiles(path.join(packageRoot, 'src', 'core')),
+    ...sourceFiles(path.join(packageRoot, 'src', 'render')),
+    path.join(packageRoot, 'src', 'load', 'fitDataset.ts'),
+    path.join(packageRoot, 'src', 'load', 'fitHandbook.ts'),
+  ];
   for (const file of files) {
     try {
       hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');

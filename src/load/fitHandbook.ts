@@ -4,7 +4,8 @@
  * fitted is kept with `fitted` undefined so callers can say so.
  */
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
-import { fitCacheKey, readCachedFit, writeCachedFit, type FitCache } from './fitCache.ts';
+import { fitCacheKey, readCachedFit, writeCachedFit, type CachedFit, type FitCache } from './fitCache.ts';
+import { orderPreviews } from '../render/orderPreviews.ts';
 import { readHandbook } from './readHandbook.ts';
 import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
 import type { DatasetResult } from './types.ts';
@@ -35,14 +36,23 @@ export interface FitHandbookOptions {
   readonly onFitted?: (done: number, total: number) => void;
 }
 
-/** One folder's fit, from the cache when it holds the same inputs, else fitted (and then cached). */
+/**
+ * A folder's cache record: the fit, the previews of the orders not published (computed here once, not on every
+ * page render) and every data row.
+ */
+export function cacheRecord(correlation: Parameters<typeof fitDataset>[0], fitted: DatasetFit): CachedFit {
+  const previews = fitted.fit === undefined ? null : orderPreviews({ settings: correlation.meta.fit, used: correlation.used, range: correlation.range }, fitted.fit, fitted.selection);
+  return { fit: fitted.fit, selection: fitted.selection, diagnostics: fitted.diagnostics, points: correlation.points, previews };
+}
+
+/** One folder's fit, from the cache when it holds the same inputs, else fitted (and then cached with its previews). */
 function fitWithCache(correlation: Parameters<typeof fitDataset>[0], cache: FitCache | undefined): { fitted: DatasetFit; cached: boolean } {
   if (cache === undefined) return { fitted: fitDataset(correlation), cached: false };
   const key = fitCacheKey(correlation, cache.version);
   const hit = readCachedFit(cache.directory, key);
-  if (hit !== undefined) return { fitted: { ...hit, cacheKey: key }, cached: true };
+  if (hit !== undefined) return { fitted: { fit: hit.fit, selection: hit.selection, diagnostics: hit.diagnostics, cacheKey: key }, cached: true };
   const fitted = fitDataset(correlation);
-  writeCachedFit(cache.directory, key, fitted);
+  writeCachedFit(cache.directory, key, cacheRecord(correlation, fitted));
   return { fitted: { ...fitted, cacheKey: key }, cached: false };
 }
 

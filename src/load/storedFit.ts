@@ -1,18 +1,19 @@
 /**
  * Reading a fit back for the pages: the site's content store keeps only a reference to the fit cache
- * (src/load/fitCache.ts), and pages ask for the fit and its order table through this. The last few are kept in
- * memory, since one correlation's page and downloads are rendered from the same fit.
+ * (src/load/fitCache.ts), and pages ask for the fit, its order table, the previews of the other orders and the
+ * data rows through this. The last few are kept in memory, since one page reads the same record several times.
  */
 import type { OrderSelection, PolynomialFit } from '../core/index.ts';
-import { readCachedFit } from './fitCache.ts';
-import type { DatasetFit } from './fitDataset.ts';
+import type { OrderPreviews } from '../render/orderPreviews.ts';
+import type { DataPoint } from '../schema/index.ts';
+import { readCachedFit, type CachedFit } from './fitCache.ts';
 
 /** What the store keeps instead of the fit: where it is cached. */
 export interface StoredFitReference {
   readonly fitCache: { readonly directory: string; readonly key: string };
 }
 
-const recent = new Map<string, DatasetFit>();
+const recent = new Map<string, CachedFit>();
 const KEEP = 32;
 
 /** Is this stored value a reference rather than the fit itself? */
@@ -20,7 +21,7 @@ export function isStoredFitReference(value: unknown): value is StoredFitReferenc
   return typeof value === 'object' && value !== null && 'fitCache' in value;
 }
 
-function load(reference: StoredFitReference): DatasetFit {
+function load(reference: StoredFitReference): CachedFit {
   const { directory, key } = reference.fitCache;
   const kept = recent.get(key);
   if (kept !== undefined) return kept;
@@ -39,4 +40,14 @@ export function storedFit(reference: StoredFitReference): PolynomialFit | undefi
 /** The order selection behind a stored reference. */
 export function storedSelection(reference: StoredFitReference): OrderSelection | undefined {
   return load(reference).selection;
+}
+
+/** Every data row behind a stored reference, in file order. */
+export function storedPoints(reference: StoredFitReference): readonly DataPoint[] {
+  return load(reference).points;
+}
+
+/** The previews of the orders not published, behind a stored reference (null when there are none). */
+export function storedPreviews(reference: StoredFitReference): OrderPreviews | null {
+  return load(reference).previews ?? null;
 }

@@ -36,16 +36,19 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   for (const { dataset, fitted, review } of handbook.datasets) {
     const correlation = dataset.correlation;
     if (correlation === undefined || fitted === undefined || review === undefined) continue;
+    // Large parts (the fit, its order table and previews, the data rows) stay in the fit cache; the store refers to
+    // them, so that Astro's store, the module it is bundled into and every getCollection copy stay small.
+    const reference = fitted.cacheKey === undefined ? undefined : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } };
     const entry: CorrelationEntry = {
       slug: correlation.slug,
       meta: correlation.meta,
-      points: [...correlation.points],
+      points: reference ?? [...correlation.points],
       excluded: [...correlation.excluded],
       dataRange: correlation.dataRange,
       range: correlation.range,
       warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
-      fit: fitted.fit === undefined || fitted.cacheKey === undefined ? null : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } },
-      orderSelection: fitted.selection === undefined || fitted.cacheKey === undefined ? null : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } },
+      fit: fitted.fit === undefined || reference === undefined ? null : reference,
+      orderSelection: fitted.selection === undefined || reference === undefined ? null : reference,
       reviewTrail: {
         fingerprint: review.fingerprint?.text ?? null,
         approval: review.approval.state,

@@ -15,3 +15,4 @@ export { svgAxes } from './svgAxes.ts';
 export { renderOverlaySvg, SERIES_COLORS, SERIES_DASHES, type OverlaySeries } from './renderOverlaySvg.ts';
 export { overlapComparison, type OverlapComparison } from './overlapComparison.ts';
 export { renderOrderStatsSvg, type OrderStatPanel } from './renderOrderStatsSvg.ts';
+export { orderPreviews, sampleIndices, type OrderPreview, type OrderPreviewInput, type OrderPreviews, type OrderStatistics } from './orderPreviews.ts';

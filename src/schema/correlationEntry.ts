@@ -47,6 +47,13 @@ export const diagnosticSchema = z
   })
   .strict();
 
+/** Where the site's content store keeps a large part of an entry instead: a record of the fit cache. */
+const storedReferenceSchema = z
+  .object({
+    fitCache: z.object({ directory: z.string(), key: z.string() }).strict(),
+  })
+  .strict();
+
 /** A closed interval of x, in the variable's unit. */
 const intervalSchema = z
   .object({
@@ -124,8 +131,13 @@ export const correlationEntrySchema = z
     slug: z.string().describe('URL slug'),
     /** The validated metadata, defaults filled in. */
     meta: correlationMetaSchema,
-    /** Every data row, in file order. */
-    points: z.array(dataPointSchema).describe('Every data row, in file order'),
+    /**
+     * Every data row, in file order; or, in the site's content store, where they are kept instead (the fit cache
+     * record of this entry, read by the pages through src/components/lib/entryView.ts pointsOf).
+     */
+    points: z
+      .union([z.array(dataPointSchema), storedReferenceSchema])
+      .describe('Every data row, in file order, or a reference to the fit cache record holding them'),
     /** Rows left out of the fit. */
     excluded: z.array(excludedPointSchema).describe('Rows left out of the fit'),
     /** x range of the points used in the fit. */

@@ -8,7 +8,9 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitHandbook } from '../../src/load/index.ts';
-import { fitCacheKey, fromCacheJson, toCacheJson } from '../../src/load/fitCache.ts';
+import { fitCacheKey, fromCacheJson, readCachedFit, toCacheJson } from '../../src/load/fitCache.ts';
+import { fitPolynomial } from '../../src/core/index.ts';
+import { orderPreviews } from '../../src/render/index.ts';
 import { fitCodeVersion } from '../../src/load/fitCodeVersion.ts';
 
 let root = '';
@@ -48,6 +50,33 @@ describe('fit cache', () => {
     expect(fitsOf(second)).toEqual(fitsOf(fresh));
     expect(second.diagnostics).toEqual(fresh.diagnostics);
     expect(second.datasets.map((item) => item.review)).toEqual(fresh.datasets.map((item) => item.review));
+  });
+
+  it('a cache record carries every data row and the previews of the other orders, the same as drawn from full fits of those orders', async () => {
+    const content = path.join(root, 'content');
+    const fitCache = { directory: path.join(root, 'cache-record'), version: 'test-1' };
+    const handbook = await fitHandbook(content, { fitCache });
+    for (const { dataset, fitted } of handbook.datasets) {
+      const correlation = dataset.correlation!;
+      const record = readCachedFit(fitCache.directory, fitted!.cacheKey!)!;
+      expect(record.points).toEqual(correlation.points);
+      expect(record.previews).not.toBeNull();
+      // Independent of fitCurve: each previewed order refitted by fitPolynomial (exact off), evaluated on the same grid.
+      const settings = correlation.meta.fit;
+      const used = correlation.used;
+      const expected = orderPreviews({ settings, used, range: correlation.range }, fitted!.fit!, fitted!.selection);
+      expect(record.previews).toEqual(expected);
+      for (const preview of record.previews!.previews) {
+        const full = fitPolynomial(
+          { x: used.map((p) => p.x), y: used.map((p) => p.y), uncertainty: settings.weights === 'uncertainty' ? used.map((p) => p.uncertainty ?? NaN) : undefined },
+          { order: preview.order, intercept: settings.intercept, transformX: settings.transform.x, transformY: settings.transform.y, constraints: settings.passThrough.map((p) => ({ x: p.x, y: p.y })), range: correlation.range, exact: 'off', ...(settings.criterion === 'chiSquare' ? { uncertaintyScale: 'stated' as const } : {}) },
+        );
+        // The residual sample always ends at the last point used; residuals are drawn to 3 significant digits.
+        const last = record.previews!.residualX.length - 1;
+        expect(record.previews!.residualX[last]).toBe(used[used.length - 1]!.x);
+        expect(preview.residuals[last]).toBe(Number(full.points.residualsOriginal[used.length - 1]!.toPrecision(3)));
+      }
+    }
   });
 
   it('fitCacheKey changes with a data value, a fit option and the code version, and only then', async () => {

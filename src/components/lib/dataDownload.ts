@@ -7,7 +7,7 @@
 import { cautionsFor } from '../../core/index.ts';
 import { spreadsheetSafeText } from '../../export/index.ts';
 import { dataRows } from './dataRows.ts';
-import { INVENTED_NOTICE, unitSuffix, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
+import { INVENTED_NOTICE, pointsOf, unitSuffix, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
 
 /** Quote a CSV field when it needs it (RFC 4180); neutralise a leading formula character in text. */
 function textField(text: string): string {
@@ -40,7 +40,7 @@ export function dataCsv(entry: CorrelationEntry, fit: PolynomialFit): string {
   lines.push('row,line,x,y,uncertainty,used,residual,studentized,leverage,cooks_distance,excluded_reason,note');
   const byRow = new Map(dataRows(entry, fit).map((row) => [row.point.row, row]));
   const excluded = new Map(entry.excluded.map((point) => [point.row, point.reason]));
-  for (const point of entry.points) {
+  for (const point of pointsOf(entry)) {
     const row = byRow.get(point.row);
     lines.push(
       [

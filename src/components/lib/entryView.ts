@@ -7,9 +7,10 @@ import { plainSymbol, type PolynomialFit } from '../../core/index.ts';
 import { INVENTED_NOTICE } from '../../export/index.ts';
 import type { OrderSelection } from '../../core/index.ts';
 import type { CorrelationEntry, DataPoint } from '../../schema/index.ts';
-import { isStoredFitReference, storedFit, storedSelection } from '../../load/storedFit.ts';
+import { isStoredFitReference, storedFit, storedPoints, storedPreviews, storedSelection } from '../../load/storedFit.ts';
+import { orderPreviews, type OrderPreviews } from '../../render/index.ts';
 
-export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection };
+export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection, OrderPreviews };
 export { INVENTED_NOTICE, plainSymbol };
 
 /**
@@ -27,10 +28,24 @@ export function selectionOf(entry: CorrelationEntry): OrderSelection | null {
   return isStoredFitReference(entry.orderSelection) ? (storedSelection(entry.orderSelection) ?? null) : (entry.orderSelection as unknown as OrderSelection);
 }
 
+/** Every data row of the entry, in file order (the store keeps them in the fit cache; test entries hold them). */
+export function pointsOf(entry: CorrelationEntry): readonly DataPoint[] {
+  return isStoredFitReference(entry.points) ? storedPoints(entry.points) : entry.points;
+}
+
 /** The points used in the fit, in file order: the same order as the fit's per-point diagnostics. */
 export function usedPoints(entry: CorrelationEntry): DataPoint[] {
   const excludedRows = new Set(entry.excluded.map((point) => point.row));
-  return entry.points.filter((point) => !excludedRows.has(point.row));
+  return pointsOf(entry).filter((point) => !excludedRows.has(point.row));
+}
+
+/**
+ * Previews of the orders not published (src/render/orderPreviews.ts): computed once when the dataset was fitted
+ * and kept in the fit cache; computed here for an entry that holds its fit itself (tests).
+ */
+export function previewsOf(entry: CorrelationEntry, fit: PolynomialFit, selection: OrderSelection | null): OrderPreviews | null {
+  if (isStoredFitReference(entry.fit)) return storedPreviews(entry.fit);
+  return orderPreviews({ settings: entry.meta.fit, used: usedPoints(entry), range: entry.range }, fit, selection);
 }
 
 /** Unit suffix for text: "" for a dimensionless quantity (unit "1"), else " unit". */

@@ -15,7 +15,7 @@ import { localUncertainty } from './localUncertainty.ts';
 import { intervalHalfWidths } from './publishedEstimate.ts';
 import { basisAt, evaluateFit } from '../evaluate.ts';
 import { inverseY } from '../transforms.ts';
-import type { PolynomialFit } from '../types.ts';
+import type { BandFit } from '../types.ts';
 
 export interface BandPoint {
   readonly x: number;
@@ -31,7 +31,7 @@ export interface BandPoint {
  * @example bands(fit, [300])[0] // => { x: 300, y: …, confidenceLow: …, confidenceHigh: …, predictionLow: …, predictionHigh: … }
  */
 export function bands(
-  fit: PolynomialFit,
+  fit: BandFit,
   xs: readonly number[],
   options: { readonly confidence?: number; readonly extrapolate?: boolean } = {},
 ): BandPoint[] {

@@ -55,7 +55,7 @@ export function profileAt(profile: { readonly x: readonly number[]; readonly sig
  * @example localUncertainty(unweightedFit, 300) // => unweightedFit.statistics.residualStdDev
  */
 export function localUncertainty(
-  fit: Pick<PolynomialFit, 'uncertaintyProfile' | 'uncertaintyScale' | 'statistics'> &
+  fit: Pick<PolynomialFit, 'uncertaintyProfile' | 'uncertaintyScale'> & { readonly statistics: Pick<PolynomialFit['statistics'], 'residualStdDev'> } &
     Partial<Pick<PolynomialFit, 'uncertaintyModel' | 'transformX' | 'transformY' | 'mapped' | 'range' | 'order'>>,
   x: number,
 ): number {

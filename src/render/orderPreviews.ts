@@ -1,13 +1,14 @@
 /**
- * Previews of the orders the selector did not publish, computed at build time so that a reviewer can see what
- * they would have looked like: for each order in the order table, its curve with its prediction band on a coarse
+ * Previews of the orders the selector did not publish, computed once per dataset when it is fitted (the loader
+ * stores them in the fit cache beside the fit, src/load/fitHandbook.ts) so that a reviewer can see what they would
+ * have looked like: for each order in the order table, its curve with its prediction band on a coarse
  * grid, its residuals at (a sample of) the points, and its statistics from the order table. Kept small: SAMPLES
  * curve rows and at most RESIDUAL_SAMPLE residuals per order, numbers rounded for drawing. The published order is
- * the page's own chart and is not repeated. Floating-point fits (exact certification off): a preview is a picture.
+ * the page's own chart and is not repeated. Floating-point fits (fitCurve in the core): a preview is a picture.
  */
-import { bands, fitPolynomial, formatNumber, formatRSquared, type FitData } from '../../core/index.ts';
-import { evenGrid, roundForChart } from '../../render/index.ts';
-import { usedPoints, type CorrelationEntry, type OrderSelection, type PolynomialFit } from './entryView.ts';
+import { bands, fitCurve, formatNumber, formatRSquared, type FitData, type OrderSelection, type PolynomialFit } from '../core/index.ts';
+import { evenGrid } from './buildChartData.ts';
+import { roundForChart } from './roundForChart.ts';
 
 const SAMPLES = 30;
 const RESIDUAL_SAMPLE = 60;
@@ -57,6 +58,20 @@ function statisticsOf(row: OrderSelection['orders'][number]): OrderStatistics {
   };
 }
 
+/** What the previews are computed from: the fit settings of the metadata, the points used and the validity range. */
+export interface OrderPreviewInput {
+  readonly settings: {
+    readonly intercept: boolean;
+    readonly transform: { readonly x: PolynomialFit['transformX']; readonly y: PolynomialFit['transformY'] };
+    readonly passThrough: readonly { readonly x: number; readonly y: number }[];
+    readonly weights: string;
+    readonly criterion?: string | undefined;
+  };
+  /** The points used in the fit, in file order. */
+  readonly used: readonly { readonly x: number; readonly y: number; readonly uncertainty?: number | undefined }[];
+  readonly range: { readonly min: number; readonly max: number };
+}
+
 /** Indices 0…n−1 thinned evenly to at most `limit`. @example sampleIndices(5, 3) // => [0, 2, 4] */
 export function sampleIndices(n: number, limit: number): number[] {
   if (n <= limit) return Array.from({ length: n }, (_, i) => i);
@@ -65,37 +80,35 @@ export function sampleIndices(n: number, limit: number): number[] {
 
 /**
  * Previews of every other order in the table, or null without a table.
- * @example orderPreviews(entry, fit, selection)?.previews.map((p) => p.order) // => [1, 3, 4, …]
+ * @example orderPreviews({ settings: meta.fit, used, range }, fit, selection)?.previews.map((p) => p.order) // => [1, 3, 4, …]
  */
-export function orderPreviews(entry: CorrelationEntry, fit: PolynomialFit, selection: OrderSelection | null): OrderPreviews | null {
-  if (selection === null || selection.orders.length < 2) return null;
-  const settings = entry.meta.fit;
-  const used = usedPoints(entry);
+export function orderPreviews(input: OrderPreviewInput, fit: PolynomialFit, selection: OrderSelection | null | undefined): OrderPreviews | null {
+  if (selection === null || selection === undefined || selection.orders.length < 2) return null;
+  const { settings, used, range } = input;
   const data: FitData = {
     x: used.map((point) => point.x),
     y: used.map((point) => point.y),
     uncertainty: settings.weights === 'uncertainty' ? used.map((point) => point.uncertainty ?? NaN) : undefined,
   };
-  const grid = evenGrid(entry.range.min, entry.range.max, SAMPLES);
+  const grid = evenGrid(range.min, range.max, SAMPLES);
   const sample = sampleIndices(used.length, RESIDUAL_SAMPLE);
   const previews: OrderPreview[] = [];
   for (const row of selection.orders) {
     if (row.order === fit.order) continue;
     try {
-      const other = fitPolynomial(data, {
+      const other = fitCurve(data, {
         order: row.order,
         intercept: settings.intercept,
         transformX: settings.transform.x,
         transformY: settings.transform.y,
         constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
-        range: entry.range,
-        exact: 'off',
+        range,
         ...(settings.criterion === 'chiSquare' ? { uncertaintyScale: 'stated' as const } : {}),
       });
       previews.push({
         order: row.order,
         curve: bands(other, grid).map((band) => [roundForChart(band.y, 5), roundForChart(band.predictionLow, 4), roundForChart(band.predictionHigh, 4)]),
-        residuals: sample.map((i) => roundForChart(other.points.residualsOriginal[i] ?? NaN, 3)),
+        residuals: sample.map((i) => roundForChart(other.residualsOriginal[i] ?? NaN, 3)),
         statistics: statisticsOf(row),
       });
     } catch {
