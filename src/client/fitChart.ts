@@ -2,8 +2,9 @@
  * Browser-only chart of one correlation: data, fitted curve, confidence and prediction bands, and a residual plot.
  * It draws only what the page embedded at build time (src/render/buildChartData.ts); no fitting or statistics
  * happen here. Scales and path data come from src/render, as in the server-side SVG, so both pictures agree.
- * The chart can be redrawn with other scales (zoom) and with a previewed order beside the published one; the
- * behaviours live in their own modules (chartZoom, chartHover, orderPreview) and call `redraw`.
+ * The chart can be redrawn with other scales (zoom), with a previewed order beside the published one, and, for a
+ * transformed fit, in the coordinates where it was fitted (render/fittedChartData.ts); the behaviours live in their
+ * own modules (chartZoom, chartHover, orderPreview, chartCoordinates) and call `redraw` or `rescale`.
  */
 import { axisBottom, axisLeft } from 'd3-axis';
 import type { ScaleLinear } from 'd3-scale';
@@ -12,6 +13,7 @@ import { CHART_COLORS, CHART_LAYOUT } from '../render/chartLayout.ts';
 import { bandPath, linePath } from '../render/chartPaths.ts';
 import { chartScales, type ChartScales } from '../render/chartScales.ts';
 import type { FitChartData, PointRow } from '../render/chartTypes.ts';
+import { fittedChartData, fittedPreview } from '../render/fittedChartData.ts';
 import { residualBandRows } from '../render/residualBandRows.ts';
 
 export type { FitChartData } from '../render/chartTypes.ts';
@@ -29,8 +31,17 @@ export interface OrderPreviewData {
   readonly residuals: readonly (readonly [number, number])[];
 }
 
+/** 'measured': y against x as the data were given; 'fitted': v against u, where a transformed fit was made. */
+export type ChartCoordinates = 'measured' | 'fitted';
+
 export interface FitChart {
+  /** The data drawn now: `measured`, or `fitted` when the chart shows the fitted coordinates. */
   readonly data: FitChartData;
+  /** The page's chart data, in the user's x and y. */
+  readonly measured: FitChartData;
+  /** The same in the fitted coordinates of a transformed fit; null for an untransformed one. */
+  readonly fitted: FitChartData | null;
+  coordinates: ChartCoordinates;
   readonly container: HTMLElement;
   readonly main: Svg;
   readonly lower: Svg;
@@ -38,9 +49,12 @@ export interface FitChart {
   base: ChartScales;
   /** Scales now drawn. */
   view: ChartScales;
+  /** A previewed order, in the user's x and y (drawn in the coordinates shown). */
   preview: OrderPreviewData | null;
   /** Redraw every mark with `view` and `preview`. */
   redraw(): void;
+  /** New base scales for the data and preview now shown (nothing zoomed), then redraw. */
+  rescale(): void;
   /** Listeners called after each redraw (e.g. the hover read-out hides its marker). */
   readonly listeners: (() => void)[];
 }
@@ -107,12 +121,21 @@ export function drawFitChart(container: HTMLElement, data: FitChartData): FitCha
   const lower = frame(container, RESIDUAL_HEIGHT, `Residuals against ${data.xLabel}, with the bands drawn about the curve`);
   const lowerMarks = clippedGroup(lower, RESIDUAL_HEIGHT);
   const lowerAxes = lower.append('g').attr('class', 'axes');
-  const residualRows = residualBandRows(data.curve);
-  const barred = data.points.filter((point) => point.length === 6);
+  const fitted = fittedChartData(data);
+  let derivedFor: FitChartData | null = null;
+  let residualRows = residualBandRows(data.curve);
+  let barred: PointRow[] = [];
+  /** The preview as drawn: mapped into the fitted coordinates when those are shown. */
+  const drawnPreview = (): OrderPreviewData | null => (chart.preview && chart.coordinates === 'fitted' ? fittedPreview(chart.preview, data) : chart.preview);
   const base = chartScales(data);
 
   const chart: FitChart = {
-    data,
+    get data() {
+      return chart.coordinates === 'fitted' && fitted !== null ? fitted : data;
+    },
+    measured: data,
+    fitted,
+    coordinates: 'measured',
     container,
     main,
     lower,
@@ -120,9 +143,21 @@ export function drawFitChart(container: HTMLElement, data: FitChartData): FitCha
     view: base,
     preview: null,
     listeners: [],
+    rescale() {
+      const preview = drawnPreview();
+      chart.base = chartScales(chart.data, preview ? { curve: preview.curve, residuals: preview.residuals.map((r) => r[1]) } : {});
+      chart.view = chart.base;
+      chart.redraw();
+    },
     redraw() {
       const { x, y, residual } = chart.view;
-      const preview = chart.preview;
+      const data = chart.data;
+      if (derivedFor !== data) {
+        derivedFor = data;
+        residualRows = residualBandRows(data.curve);
+        barred = data.points.filter((point) => point.length === 6) as PointRow[];
+      }
+      const preview = drawnPreview();
       setPath(mainMarks, 'band-prediction', bandPath(data.curve, x, y, 4, 5), { fill: CHART_COLORS.prediction });
       setPath(mainMarks, 'band-confidence', bandPath(data.curve, x, y, 2, 3), { fill: CHART_COLORS.confidence });
       setPath(mainMarks, 'preview-band', preview ? bandPath(preview.curve, x, y, 2, 3) : '', { fill: CHART_COLORS.previewBand, 'fill-opacity': 0.55 });
@@ -188,7 +223,7 @@ export function drawFitChart(container: HTMLElement, data: FitChartData): FitCha
       // The previewed order's residuals: small open squares, one path.
       const squares = preview ? preview.residuals.map(([px, r]) => `M${x(px) - 3},${residual(r) - 3}h6v6h-6z`).join('') : '';
       setPath(lowerMarks, 'preview-residuals', squares, { fill: 'none', stroke: CHART_COLORS.preview, 'stroke-width': 1.2 });
-      drawAxes(lowerAxes, x, residual, RESIDUAL_HEIGHT, data.xLabel, 'residual', 4);
+      drawAxes(lowerAxes, x, residual, RESIDUAL_HEIGHT, data.xLabel, data.residualLabel, 4);
       for (const listener of chart.listeners) listener();
     },
   };

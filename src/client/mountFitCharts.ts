@@ -1,8 +1,9 @@
 /**
  * Page entry of the fit charts: find every `[data-fit-chart]` figure, read its embedded chart data (or fetch it
- * from the file the figure names, for large data sets), draw it, and add zoom, hover read-out and, when the page
- * has an order table with previews, the order preview. The static SVG picture is hidden once the chart is drawn.
+ * from the file the figure names, for large data sets), draw it, and add zoom, hover read-out, the "as fitted"
+ * switch of a transformed fit and, when the page has an order table with previews, the order preview. The static SVG picture is hidden once the chart is drawn.
  */
+import { addChartCoordinates } from './chartCoordinates.ts';
 import { addChartHover } from './chartHover.ts';
 import { addChartZoom, type ChartZoom } from './chartZoom.ts';
 import { drawFitChart, type FitChart, type FitChartData } from './fitChart.ts';
@@ -40,6 +41,7 @@ export async function mountFitCharts(root: ParentNode = document): Promise<Mount
       const chart = drawFitChart(target, data);
       addChartHover(chart);
       const zoom = addChartZoom(chart);
+      addChartCoordinates(chart, zoom);
       target.removeAttribute('aria-hidden');
       figure.classList.add('chart-drawn');
       charts.push({ chart, zoom });

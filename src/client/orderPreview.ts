@@ -4,7 +4,6 @@
  * the order table (mouse, or Enter/Space on the focused control); "Back to the published order" clears it.
  * Everything shown was computed at build time (src/render/orderPreviews.ts, stored with the fit by the loader).
  */
-import { chartScales } from '../render/chartScales.ts';
 import type { OrderPreviewData } from './fitChart.ts';
 import { chartsReady } from './mountFitCharts.ts';
 
@@ -71,8 +70,7 @@ export async function mountOrderPreview(root: Document = document): Promise<void
   function choose(order: number): void {
     const preview = order === data.published ? null : previewData(data, order);
     chart.preview = preview;
-    chart.base = chartScales(chart.data, preview ? { curve: preview.curve, residuals: preview.residuals.map((r) => r[1]) } : {});
-    chart.view = chart.base;
+    chart.rescale();
     zoom.reset();
     chart.redraw();
     for (const button of buttons) button.setAttribute('aria-pressed', String(Number(button.dataset['previewOrder']) === (preview?.order ?? data.published)));

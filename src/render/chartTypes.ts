@@ -18,6 +18,18 @@ export interface ExcludedPoint {
   readonly reason: string;
 }
 
+/**
+ * Where a transformed fit was made: its x and y transforms (core/transforms.ts) and the axis titles there, e.g.
+ * "reciprocal temperature, 1/T (1/K)" and "ln of vapour pressure, ln(p / kPa)". Absent for an untransformed fit.
+ */
+export interface FittedCoordinates {
+  readonly x: 'identity' | 'reciprocal' | 'log';
+  readonly y: 'identity' | 'log';
+  readonly xLabel: string;
+  readonly yLabel: string;
+  readonly residualLabel: string;
+}
+
 export interface FitChartData {
   readonly xLabel: string;
   readonly yLabel: string;
@@ -30,6 +42,8 @@ export interface FitChartData {
   /** Points used in the fit. */
   readonly points: readonly PointRow[];
   readonly excluded: readonly ExcludedPoint[];
+  /** A transformed fit's own coordinates, for the chart's "as fitted" view (render/fittedChartData.ts). */
+  readonly fitted?: FittedCoordinates;
 }
 
 /** Residual band rows derived from the curve: [x, conf. low − fit, conf. high − fit, pred. low − fit, pred. high − fit]. */

@@ -2,7 +2,8 @@
  * The chart renderer's door: pure functions (no DOM, no file I/O) that turn a fit into chart data and SVG
  * text. The browser chart (src/client) imports the scales and paths from here too, so both draw alike.
  */
-export type { CurveRow, ExcludedPoint, FitChartData, PointRow, ResidualBandRow } from './chartTypes.ts';
+export type { CurveRow, ExcludedPoint, FitChartData, FittedCoordinates, PointRow, ResidualBandRow } from './chartTypes.ts';
+export { fittedChartData, fittedPreview, fittedResidual, fittedX, fittedY, type PreviewMarks } from './fittedChartData.ts';
 export { CHART_COLORS, CHART_LAYOUT } from './chartLayout.ts';
 export { chartScales, paddedExtent, type ChartScales, type ExtraMarks } from './chartScales.ts';
 export { bandPath, linePath } from './chartPaths.ts';

@@ -72,7 +72,10 @@ export interface OrderPreviewInput {
   readonly range: { readonly min: number; readonly max: number };
 }
 
-/** Indices 0…n−1 thinned evenly to at most `limit`. @example sampleIndices(5, 3) // => [0, 2, 4] */
+/**
+ * Indices 0…n−1 thinned evenly to at most `limit` (render/fittedPreview finds a residual's point by the same rule).
+ * @example sampleIndices(5, 3) // => [0, 2, 4]
+ */
 export function sampleIndices(n: number, limit: number): number[] {
   if (n <= limit) return Array.from({ length: n }, (_, i) => i);
   return Array.from({ length: limit }, (_, i) => Math.round((i * (n - 1)) / (limit - 1)));

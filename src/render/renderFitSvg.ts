@@ -52,7 +52,7 @@ export function renderFitSvg(data: FitChartData, options: RenderFitSvgOptions = 
   const lower = [
     `<path d="${bandPath(residualRows, x, residual, 3, 4)}" fill="${CHART_COLORS.prediction}"/>`,
     `<path d="${bandPath(residualRows, x, residual, 1, 2)}" fill="${CHART_COLORS.confidence}"/>`,
-    axes(x, residual, residualHeight, data.xLabel, 'residual', 4),
+    axes(x, residual, residualHeight, data.xLabel, data.residualLabel, 4),
     `<line x1="${margin.left}" x2="${width - margin.right}" y1="${zero}" y2="${zero}" stroke="${CHART_COLORS.zero}" stroke-dasharray="4 3"/>`,
     dots(data.points.filter((p) => Number.isFinite(p[3])).map((p) => [x(p[1]), residual(p[3])]), CHART_COLORS.point, 6),
   ].join('');

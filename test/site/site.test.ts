@@ -23,6 +23,7 @@ import { pythonExactLeastSquares } from '../helpers/pythonExact.ts';
 import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '../../src/load/index.ts';
 import { buildSite, projectRoot } from './buildSite.ts';
 import { checkHandbookJson } from './handbookJsonChecks.ts';
+import { describeChart } from './chartChecks.ts';
 import { describeNumbers } from './numberChecks.ts';
 import { describeEvaluator } from './evaluatorChecks.ts';
 import { describeReading } from './readingChecks.ts';
@@ -551,6 +552,10 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
       await server.close();
     }
   });
+});
+
+describe.skipIf(!existsSync(CHROMIUM))('the fit chart: fitted coordinates and read-out (test/site/chartChecks.ts)', () => {
+  describeChart(() => ({ siteRoot, outDir, base: BASE, correlations }));
 });
 
 describe.skipIf(!existsSync(CHROMIUM))('reading and reviewing (test/site/readingChecks.ts)', () => {

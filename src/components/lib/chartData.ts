@@ -1,9 +1,10 @@
 /**
  * What the chart draws for one correlation, computed at build time by the shared renderer (src/render): the
  * points, the fitted curve with its confidence and prediction bands over the validity range, and the residuals.
- * The browser only draws this; the static SVG is drawn from the same data.
+ * The browser only draws this; the static SVG is drawn from the same data. A transformed fit also names its fitted
+ * coordinates (transforms and axis titles, a hundred bytes), from which the browser draws the "as fitted" view.
  */
-import { buildChartData, type FitChartData } from '../../render/index.ts';
+import { buildChartData, type FitChartData, type FittedCoordinates } from '../../render/index.ts';
 import { labelSymbol, unitSuffix, usedPoints, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
 
 export type { FitChartData };
@@ -11,17 +12,50 @@ export type { FitChartData };
 /** Above this many points the page links its chart data instead of embedding it (keeps the HTML small). */
 export const EMBED_POINT_LIMIT = 400;
 
+/** A unit as a divisor: "K" stays "K", "m/s" becomes "(m/s)". */
+function divisor(unit: string): string {
+  return /[\s/·*^]/.test(unit) ? `(${unit})` : unit;
+}
+
+/** ln of a quantity made dimensionless by its unit: "ln(p / kPa)", or "ln x" for a dimensionless x. */
+function lnText(symbol: string, unit: string): string {
+  return unitSuffix(unit) ? `ln(${symbol} / ${unit})` : `ln ${symbol}`;
+}
+
+/**
+ * The fitted coordinates of a transformed fit, or undefined for an untransformed one.
+ * @example fittedCoordinates(vapourPressure, fit) // => { x: 'reciprocal', y: 'log', xLabel: 'reciprocal temperature, 1/T (1/K)', yLabel: 'ln of vapour pressure, ln(p_σ / kPa)', … }
+ */
+export function fittedCoordinates(entry: CorrelationEntry, fit: PolynomialFit, measured: { xLabel: string; yLabel: string; residualLabel: string }): FittedCoordinates | undefined {
+  if (fit.transformX === 'identity' && fit.transformY === 'identity') return undefined;
+  const { variable, property } = entry.meta;
+  const x = labelSymbol(variable.symbol);
+  const y = labelSymbol(property.symbol);
+  const xLabel =
+    fit.transformX === 'reciprocal'
+      ? `reciprocal ${variable.name}, 1/${x}${unitSuffix(variable.unit) ? ` (1/${divisor(variable.unit)})` : ''}`
+      : fit.transformX === 'log'
+        ? `ln of ${variable.name}, ${lnText(x, variable.unit)}`
+        : measured.xLabel;
+  const logY = fit.transformY === 'log';
+  return {
+    x: fit.transformX,
+    y: fit.transformY,
+    xLabel,
+    yLabel: logY ? `ln of ${property.name}, ${lnText(y, property.unit)}` : measured.yLabel,
+    residualLabel: logY ? 'residual ln y − ln ŷ' : measured.residualLabel,
+  };
+}
+
 /** Chart data for one correlation, with bands on `count` grid points (default 120). */
 export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 120): FitChartData {
   const { variable, property } = entry.meta;
-  return buildChartData({
-    fit,
-    points: usedPoints(entry),
-    excluded: entry.excluded,
+  const labels = {
     xLabel: `${variable.name}, ${labelSymbol(variable.symbol)}${unitSuffix(variable.unit) ? ` (${variable.unit})` : ''}`,
     yLabel: `${property.name}, ${labelSymbol(property.symbol)}${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
     residualLabel: `residual y − ŷ${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
-    range: entry.range,
-    count,
-  });
+  };
+  const data = buildChartData({ fit, points: usedPoints(entry), excluded: entry.excluded, ...labels, range: entry.range, count });
+  const fitted = fittedCoordinates(entry, fit, labels);
+  return fitted === undefined ? data : { ...data, fitted };
 }
