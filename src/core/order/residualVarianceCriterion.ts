@@ -5,8 +5,9 @@
  * term whenever that term's F ratio exceeds about 1 (roughly α ≈ 0.3 per step), so it over-fits; it is kept for
  * comparison and for readers who expect it. It ranks orders exactly like adjusted R² (same ordering).
  *
- * Reference: Chapra & Canale, *Numerical Methods for Engineers*, polynomial regression chapter (standard error
- * of the estimate s_y/x = √(S_r/(n − (m+1)))); https://en.wikipedia.org/wiki/Reduced_chi-squared_statistic
+ * Reference: the residual mean square s² = S_r/(n − p) as the estimate of σ² in any linear least-squares
+ * regression text, e.g. N. R. Draper & H. Smith, *Applied Regression Analysis*, 3rd ed., Wiley 1998 (cited from
+ * memory); https://en.wikipedia.org/wiki/Reduced_chi-squared_statistic
  *
  * @example
  * residualVarianceCriterion.choose(table) // => the order with the smallest S_r/(n − p)
