@@ -24,6 +24,7 @@ import { fitDataset, fitHandbook, readHandbook, type LoadedCorrelation } from '.
 import { buildSite, projectRoot } from './buildSite.ts';
 import { checkHandbookJson } from './handbookJsonChecks.ts';
 import { describeChart } from './chartChecks.ts';
+import { describeListings } from './listingChecks.ts';
 import { describeNumbers } from './numberChecks.ts';
 import { describeEvaluator } from './evaluatorChecks.ts';
 import { describeReading } from './readingChecks.ts';
@@ -563,6 +564,7 @@ describe.skipIf(!existsSync(CHROMIUM))('reading and reviewing (test/site/reading
 });
 
 describeNumbers(() => ({ outDir, correlations }));
+describeListings(() => ({ outDir, content: path.join(workDir, 'content'), correlations }));
 describe.skipIf(!existsSync(CHROMIUM))('the evaluator and the copy buttons (test/site/evaluatorChecks.ts)', () => {
   describeEvaluator(() => ({ siteRoot, outDir, base: BASE, correlations }));
 });
