@@ -72,7 +72,7 @@ export async function runBuild(args: string[]): Promise<number> {
   const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(packageRoot()) };
   const progress = createProgress();
   progress.update(`reading ${options.content}`);
-  const handbook = await fitHandbook(options.content, { fitCache, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
+  const handbook = await fitHandbook(options.content, { fitCache, workers: { root: packageRoot() }, prune: true, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
   progress.done();
   const errors = handbook.diagnostics.filter((diagnostic) => diagnostic.severity === 'error');
   if (errors.length > 0) {

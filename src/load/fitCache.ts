@@ -15,7 +15,7 @@
  * fit equals a fresh one.
  */
 import { createHash } from 'node:crypto';
-import { mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
 import type { DataPoint } from '../schema/index.ts';
@@ -92,6 +92,11 @@ function fileOf(directory: string, key: string): string {
 
 /** The cached record under `key`, or undefined when there is none (or it cannot be read). */
 export function readCachedFit(directory: string, key: string): CachedFit | undefined {
+  return readCachedRecord(directory, key)?.record;
+}
+
+/** The cached record under `key` with the length of its file's text (for callers that keep records in memory). */
+export function readCachedRecord(directory: string, key: string): { record: CachedFit; size: number } | undefined {
   let text: string;
   try {
     text = readFileSync(fileOf(directory, key), 'utf8');
@@ -99,7 +104,7 @@ export function readCachedFit(directory: string, key: string): CachedFit | undef
     return undefined;
   }
   try {
-    return fromCacheJson(text) as CachedFit;
+    return { record: fromCacheJson(text) as CachedFit, size: text.length };
   } catch {
     return undefined; // a damaged file is refitted and rewritten
   }
@@ -112,4 +117,28 @@ export function writeCachedFit(directory: string, key: string, fitted: CachedFit
   const temporary = `${target}.${process.pid}.tmp`;
   writeFileSync(temporary, toCacheJson(fitted));
   renameSync(temporary, target);
+}
+
+/**
+ * Delete the records of a cache folder whose keys are not in `keep` (what a handbook no longer uses: older versions
+ * of changed datasets, removed folders, an older fitting code), so the folder does not grow with every edit. Only
+ * files named like records (64 hex digits, .json) are touched.
+ * @example pruneFitCache(cache.directory, new Set(keys)) // => 3 (records deleted)
+ */
+export function pruneFitCache(directory: string, keep: ReadonlySet<string>): number {
+  let names: string[];
+  try {
+    names = readdirSync(directory);
+  } catch {
+    return 0;
+  }
+  let deleted = 0;
+  for (const name of names) {
+    // Temporary files (…json.<pid>.tmp) may belong to a build running now: left alone.
+    const match = /^([0-9a-f]{64})\.json$/.exec(name);
+    if (match === null || keep.has(match[1]!)) continue;
+    rmSync(path.join(directory, name), { force: true });
+    deleted++;
+  }
+  return deleted;
 }

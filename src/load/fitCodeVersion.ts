@@ -1,7 +1,8 @@
 /**
  * The version of the fitting code, for the fit cache's keys: SHA-256 of the package version and of every source
  * file of the numerical core, of the dataset fit and of the previews stored with it (src/core/**,
- * src/load/fitDataset.ts, src/load/fitHandbook.ts, src/render/**) under the package root,
+ * src/load/fitDataset.ts, src/load/cacheRecord.ts, src/render/**, and the fitting worker's
+ * fitCache.ts and fitWorker.ts) under the package root,
  * so that a changed core never serves a stale fit, even without a new version number. Where the sources are not
  * present (a compiled install), the package version alone.
  */
@@ -36,7 +37,10 @@ export function fitCodeVersion(packageRoot: string): string {
     ...sourceFiles(path.join(packageRoot, 'src', 'core')),
     ...sourceFiles(path.join(packageRoot, 'src', 'render')),
     path.join(packageRoot, 'src', 'load', 'fitDataset.ts'),
-    path.join(packageRoot, 'src', 'load', 'fitHandbook.ts'),
+    path.join(packageRoot, 'src', 'load', 'cacheRecord.ts'),
+    // what the fitting worker's bundle (src/load/fitPool.ts), named by this version, is made of besides the above
+    path.join(packageRoot, 'src', 'load', 'fitCache.ts'),
+    path.join(packageRoot, 'src', 'load', 'fitWorker.ts'),
   ];
   for (const file of files) {
     try {

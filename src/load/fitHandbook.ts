@@ -3,12 +3,14 @@
  * Astro loader make. Every message from reading and fitting is collected; a folder that could not be read or
  * fitted is kept with `fitted` undefined so callers can say so.
  */
+import path from 'node:path';
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
-import { fitCacheKey, readCachedFit, writeCachedFit, type CachedFit, type FitCache } from './fitCache.ts';
-import { orderPreviews } from '../render/orderPreviews.ts';
+import { fitCacheKey, pruneFitCache, readCachedFit, writeCachedFit, type FitCache } from './fitCache.ts';
+import { cacheRecord } from './cacheRecord.ts';
+import { createFitPool, poolSize } from './fitPool.ts';
 import { readHandbook } from './readHandbook.ts';
 import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
-import type { DatasetResult } from './types.ts';
+import type { DatasetResult, LoadedCorrelation } from './types.ts';
 import { reviewDiagnostics, reviewTrail, type ReviewTrail } from './review/reviewTrail.ts';
 
 export interface FittedDataset {
@@ -34,26 +36,29 @@ export interface FitHandbookOptions {
   readonly fitCache?: FitCache;
   /** Called after each folder is read and fitted: done of total (for progress output). */
   readonly onFitted?: (done: number, total: number) => void;
+  /**
+   * With a fit cache: fit what is not cached in worker threads when there are many (src/load/fitPool.ts); `root` is
+   * the package root holding src/; `minimumJobs` (default POOL_MINIMUM_JOBS) the fewest datasets to fit that start
+   * workers. Without it, or when no worker can start, everything is fitted in this thread.
+   */
+  readonly workers?: { readonly root: string; readonly minimumJobs?: number };
+  /** With a fit cache: afterwards, delete the cache records of this cache that no folder of this handbook uses. */
+  readonly prune?: boolean;
 }
 
-/**
- * A folder's cache record: the fit, the previews of the orders not published (computed here once, not on every
- * page render) and every data row.
- */
-export function cacheRecord(correlation: Parameters<typeof fitDataset>[0], fitted: DatasetFit): CachedFit {
-  const previews = fitted.fit === undefined ? null : orderPreviews({ settings: correlation.meta.fit, used: correlation.used, range: correlation.range }, fitted.fit, fitted.selection);
-  return { fit: fitted.fit, selection: fitted.selection, diagnostics: fitted.diagnostics, points: correlation.points, previews };
-}
-
-/** One folder's fit, from the cache when it holds the same inputs, else fitted (and then cached with its previews). */
-function fitWithCache(correlation: Parameters<typeof fitDataset>[0], cache: FitCache | undefined): { fitted: DatasetFit; cached: boolean } {
-  if (cache === undefined) return { fitted: fitDataset(correlation), cached: false };
+/** One folder's fit from the cache, or undefined when the cache does not hold its inputs. */
+function fromCache(correlation: LoadedCorrelation, cache: FitCache): { key: string; fitted?: DatasetFit } {
   const key = fitCacheKey(correlation, cache.version);
   const hit = readCachedFit(cache.directory, key);
-  if (hit !== undefined) return { fitted: { fit: hit.fit, selection: hit.selection, diagnostics: hit.diagnostics, cacheKey: key }, cached: true };
+  return { key, ...(hit === undefined ? {} : { fitted: { fit: hit.fit, selection: hit.selection, diagnostics: hit.diagnostics, cacheKey: key } }) };
+}
+
+/** Fit in this thread, writing the cache record when there is a cache. */
+function fitHere(correlation: LoadedCorrelation, cache: FitCache | undefined, key: string | undefined): DatasetFit {
   const fitted = fitDataset(correlation);
+  if (cache === undefined || key === undefined) return fitted;
   writeCachedFit(cache.directory, key, cacheRecord(correlation, fitted));
-  return { fitted: { ...fitted, cacheKey: key }, cached: false };
+  return { ...fitted, cacheKey: key };
 }
 
 /** @example (await fitHandbook('content')).datasets.length // => 13 for the demo handbook */
@@ -64,23 +69,52 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
   const diagnostics: Diagnostic[] = [...handbook.diagnostics];
   const datasets: FittedDataset[] = [];
   const slugs = new Set(handbook.datasets.map((read) => read.slug));
-  let cachedFits = 0;
-  for (const read of handbook.datasets) {
-    diagnostics.push(...read.diagnostics);
+  const total = handbook.datasets.length;
+  let done = 0;
+  const progress = () => options.onFitted?.(++done, total);
+  // First what the cache holds, then the rest: in worker threads when there are many, else here.
+  const cache = options.fitCache;
+  const prepared = handbook.datasets.map((read) => {
     // Errors about the folder as a whole (an invalid or duplicate slug) belong to it too: such a folder is not fitted.
     const folderErrors = handbook.diagnostics.filter(
       (diagnostic) => diagnostic.severity === 'error' && (diagnostic.file === read.folder || diagnostic.file === read.metadataPath),
     );
     const dataset = folderErrors.length ? { ...read, diagnostics: [...read.diagnostics, ...folderErrors] } : read;
-    const outcome = dataset.correlation === undefined || folderErrors.length ? undefined : fitWithCache(dataset.correlation, options.fitCache);
-    if (outcome?.cached) cachedFits++;
-    const fitted = outcome?.fitted;
-    if (fitted) diagnostics.push(...fitted.diagnostics);
-    const review = fitted === undefined || dataset.correlation === undefined ? undefined : reviewTrail(dataset.correlation, fitted.fit);
-    if (review !== undefined && dataset.correlation !== undefined) diagnostics.push(...reviewDiagnostics(dataset.correlation, review, slugs));
-    datasets.push({ dataset, fitted, review });
-    options.onFitted?.(datasets.length, handbook.datasets.length);
+    const correlation = folderErrors.length ? undefined : dataset.correlation;
+    const cached = correlation === undefined || cache === undefined ? undefined : fromCache(correlation, cache);
+    if (cached?.fitted !== undefined) progress();
+    return { read, dataset, correlation, key: cached?.key, fitted: cached?.fitted };
+  });
+  const cachedFits = prepared.filter((item) => item.fitted !== undefined).length;
+  const missing = prepared.filter((item) => item.correlation !== undefined && item.fitted === undefined);
+  const pool = cache !== undefined && options.workers !== undefined ? await createFitPool(options.workers.root, cache.version, path.join(cache.directory, '..', 'correlary-worker'), poolSize(missing.length, options.workers.minimumJobs)) : undefined;
+  try {
+    await Promise.all(
+      missing.map(async (item) => {
+        const correlation = item.correlation!;
+        let fitted: DatasetFit | undefined;
+        if (pool !== undefined) {
+          try {
+            fitted = { ...(await pool.fit(correlation, cache!.directory, item.key!)), cacheKey: item.key! };
+          } catch {
+            fitted = undefined; // a worker that failed: fit here instead
+          }
+        }
+        item.fitted = fitted ?? fitHere(correlation, cache, item.key);
+        progress();
+      }),
+    );
+  } finally {
+    await pool?.close();
   }
+  for (const { read, dataset, correlation, fitted } of prepared) {
+    diagnostics.push(...read.diagnostics);
+    if (fitted) diagnostics.push(...fitted.diagnostics);
+    const review = fitted === undefined || correlation === undefined ? undefined : reviewTrail(correlation, fitted.fit);
+    if (review !== undefined && correlation !== undefined) diagnostics.push(...reviewDiagnostics(correlation, review, slugs));
+    datasets.push({ dataset, fitted, review });
+  }
+  if (cache !== undefined && options.prune) pruneFitCache(cache.directory, new Set(prepared.flatMap((item) => (item.key === undefined ? [] : [item.key]))));
   const fittingMs = performance.now() - started - readingMs;
   return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs }, cachedFits };
 }

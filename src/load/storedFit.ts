@@ -1,20 +1,24 @@
 /**
  * Reading a fit back for the pages: the site's content store keeps only a reference to the fit cache
  * (src/load/fitCache.ts), and pages ask for the fit, its order table, the previews of the other orders and the
- * data rows through this. The last few are kept in memory, since one page reads the same record several times.
+ * data rows through this. Astro renders each route for every correlation before the next route, so a record is
+ * asked for by a dozen routes far apart: records read are kept in memory for the whole build, up to KEEP_BYTES of
+ * their JSON text (then the oldest are dropped and read again when asked for).
  */
 import type { OrderSelection, PolynomialFit } from '../core/index.ts';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
 import type { DataPoint } from '../schema/index.ts';
-import { readCachedFit, type CachedFit } from './fitCache.ts';
+import { readCachedRecord, type CachedFit } from './fitCache.ts';
 
 /** What the store keeps instead of the fit: where it is cached. */
 export interface StoredFitReference {
   readonly fitCache: { readonly directory: string; readonly key: string };
 }
 
-const recent = new Map<string, CachedFit>();
-const KEEP = 32;
+const kept = new Map<string, { record: CachedFit; size: number }>();
+let keptBytes = 0;
+/** About 2–3 times this in memory once parsed: a few hundred MB at most, whatever the handbook's size. */
+const KEEP_BYTES = 192 * 1024 * 1024;
 
 /** Is this stored value a reference rather than the fit itself? */
 export function isStoredFitReference(value: unknown): value is StoredFitReference {
@@ -23,13 +27,18 @@ export function isStoredFitReference(value: unknown): value is StoredFitReferenc
 
 function load(reference: StoredFitReference): CachedFit {
   const { directory, key } = reference.fitCache;
-  const kept = recent.get(key);
-  if (kept !== undefined) return kept;
-  const fitted = readCachedFit(directory, key);
-  if (fitted === undefined) throw new Error(`storedFit requires the cached fit ${key} in ${directory}; it is missing (was the cache folder removed during the build?)`);
-  if (recent.size >= KEEP) recent.delete(recent.keys().next().value!);
-  recent.set(key, fitted);
-  return fitted;
+  const known = kept.get(key);
+  if (known !== undefined) return known.record;
+  const read = readCachedRecord(directory, key);
+  if (read === undefined) throw new Error(`storedFit requires the cached fit ${key} in ${directory}; it is missing (was the cache folder removed during the build?)`);
+  while (keptBytes + read.size > KEEP_BYTES && kept.size > 0) {
+    const [oldest, value] = kept.entries().next().value!;
+    kept.delete(oldest);
+    keptBytes -= value.size;
+  }
+  kept.set(key, read);
+  keptBytes += read.size;
+  return read.record;
 }
 
 /** The fit behind a stored reference. @example storedFit(entry.fit).order // => 2 */

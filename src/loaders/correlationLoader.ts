@@ -29,7 +29,8 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     directory: fileURLToPath(new URL('correlary-fits/', context.config.cacheDir)),
     version: fitCodeVersion(fileURLToPath(context.config.root)),
   };
-  const handbook = await fitHandbook(displayDirectory, { fitCache });
+  // Many datasets not in the cache are fitted in worker threads; records no folder uses any more are deleted.
+  const handbook = await fitHandbook(displayDirectory, { fitCache, workers: { root: fileURLToPath(context.config.root) }, prune: true });
   // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
   const histories = await handbookHistory(displayDirectory, handbook.datasets);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];

@@ -1,0 +1,26 @@
+/**
+ * A fitting worker thread (src/load/fitPool.ts): fits the correlations it is sent, writes each one's cache record
+ * and sends the fit back. Run from a bundle of this file (the pool builds it), never imported.
+ */
+import { parentPort } from 'node:worker_threads';
+import { cacheRecord } from './cacheRecord.ts';
+import { writeCachedFit } from './fitCache.ts';
+import { fitDataset } from './fitDataset.ts';
+import type { LoadedCorrelation } from './types.ts';
+
+interface Job {
+  readonly id: number;
+  readonly correlation: LoadedCorrelation;
+  readonly directory: string;
+  readonly key: string;
+}
+
+parentPort?.on('message', (job: Job) => {
+  try {
+    const fitted = fitDataset(job.correlation);
+    writeCachedFit(job.directory, job.key, cacheRecord(job.correlation, fitted));
+    parentPort!.postMessage({ id: job.id, fitted });
+  } catch (caught) {
+    parentPort!.postMessage({ id: job.id, failure: caught instanceof Error ? (caught.stack ?? caught.message) : String(caught) });
+  }
+});
