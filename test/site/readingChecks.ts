@@ -102,6 +102,10 @@ describe(`reading the handbook in Chromium (${CHROMIUM})`, () => {
     const found = await visibleSlugs(page);
     for (const slug of expected) expect(found, `${word} finds ${slug}`).toContain(slug);
     expect(found.length).toBeLessThan(correlations.length);
+    // Each result shows its review status in words (issue 12: a badge wherever a correlation is listed).
+    const badges = await page.locator('[data-catalogue-table] tbody tr:not([hidden]) .status-badge').allTextContents();
+    expect(badges).toHaveLength(found.length);
+    for (const text of badges) expect(text).toMatch(/Approved|not approved|do not use/);
     await page.screenshot({ path: path.join(SCREENSHOTS, 'catalogue-search.png'), fullPage: true });
     expect(errors).toEqual([]);
     await page.close();
