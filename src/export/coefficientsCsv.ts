@@ -35,6 +35,11 @@ export function coefficientsCsv(record: CorrelationRecord): string {
   if (record.notice) lines.push(comment(record.notice.replace(/^Invented data:/, 'INVENTED DATA:')));
   for (const caution of record.cautions) lines.push(comment(`CAUTION: ${caution}`));
   lines.push(comment(`Title: ${record.title}`));
+  if (record.handbook !== null) {
+    const handbook = record.handbook;
+    lines.push(comment(`Handbook: ${handbook.title}${handbook.organisation ? `, published by ${handbook.organisation}` : ''}; page: ${handbook.url}`));
+    if (handbook.notice) lines.push(comment(`Handbook notice: ${handbook.notice}`));
+  }
   lines.push(comment(`Status: ${record.status}`));
   if (record.approval !== null) lines.push(comment(`Approval: ${record.approval.label}; holds: ${record.approval.holds ? 'yes' : 'no'}`));
   if (record.fingerprint !== null) lines.push(comment(`Fingerprint: ${record.fingerprint}`));

@@ -7,6 +7,9 @@
  * Field names are a public interface (README "Exports"); add fields, never rename or drop them. Fields:
  *   recordVersion        1
  *   slug, title          identity of the correlation
+ *   handbook             {title, organisation, notice, url}: the handbook the record was published in (its
+ *                        handbook.yaml settings) and the absolute address of the correlation's page; null when the
+ *                        record does not come from a built handbook (correlary fit)
  *   status               review status: draft | in-review | approved | withdrawn
  *   fingerprint          fingerprint of the data, options and result (content/README.md, "Fingerprint recipe"), or
  *                        null when the record does not come from a handbook folder (correlary fit)
@@ -84,6 +87,16 @@ export interface CorrelationSource {
   readonly selection: OrderSelection | null;
   /** Fingerprint and approval state, for a correlation of a handbook. */
   readonly reviewTrail?: StoredReviewTrail | undefined;
+  /** The handbook it is published in, for the site's downloads and snippets. */
+  readonly handbook?: HandbookIdentity | undefined;
+}
+
+/** The handbook a record was published in: its settings and the absolute address of the correlation's page. */
+export interface HandbookIdentity {
+  readonly title: string;
+  readonly organisation: string | null;
+  readonly notice: string | null;
+  readonly url: string;
 }
 
 /** Version of the record's layout; raised only when a field changes meaning. */
@@ -124,6 +137,7 @@ export function correlationRecord(source: CorrelationSource) {
     recordVersion: RECORD_VERSION,
     slug: source.slug,
     title: meta.title,
+    handbook: source.handbook === undefined ? null : { title: source.handbook.title, organisation: source.handbook.organisation, notice: source.handbook.notice, url: source.handbook.url },
     status: meta.review.status,
     fingerprint: source.reviewTrail?.fingerprint ?? null,
     approval:

@@ -70,6 +70,13 @@ const correlation = {
     slug: { type: 'string', pattern: '^[a-z0-9]+(-[a-z0-9]+)*$', description: 'Identifier of the correlation (its folder name).' },
     url: { type: 'string', pattern: '^/', description: 'Path of the correlation page inside the site, base path included.' },
     title: text,
+    handbook: {
+      type: ['object', 'null'],
+      required: ['title', 'organisation', 'notice', 'url'],
+      properties: { title: text, organisation: textOrNull, notice: textOrNull, url: { type: 'string', format: 'uri' } },
+      description:
+        "The handbook the record was published in (its settings: title, organisation, notice) and the absolute address of the correlation's page; the downloads and code snippets carry the same. Null in `correlary fit --json`.",
+    },
     status: { enum: ['draft', 'in-review', 'approved', 'withdrawn'], description: 'Review status.' },
     invented: { type: 'boolean', description: 'True when the data are invented demonstration numbers.' },
     notice: { ...textOrNull, description: 'The invented-data notice, or null.' },

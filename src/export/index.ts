@@ -2,7 +2,7 @@
  * Exports of a fitted correlation: the one JSON record (used by `correlary fit --json`, the downloads and
  * handbook.json) and the coefficients CSV written from it. Pure: no file I/O, no Astro.
  */
-export { correlationRecord, RECORD_VERSION, type CorrelationRecord, type CorrelationSource } from './correlationRecord.ts';
+export { correlationRecord, RECORD_VERSION, type CorrelationRecord, type CorrelationSource, type HandbookIdentity } from './correlationRecord.ts';
 export { coefficientsCsv } from './coefficientsCsv.ts';
 export { spreadsheetSafeText } from './spreadsheetSafeText.ts';
 export { INVENTED_NOTICE } from './inventedNotice.ts';

@@ -363,6 +363,32 @@ describe('handbook.json', () => {
     expect(json.handbook.title).toBe(SETTINGS.title);
     expect(json.cautions).toEqual(CAUTIONS);
   });
+
+  it("the handbook's own settings reach every export: handbook.json, coefficients.json and .csv, data.csv and each code snippet's header", async () => {
+    // SETTINGS is the handbook.yaml this test wrote into the copied content; every expected text is built from it.
+    const site = `${SETTINGS.url}${BASE}`;
+    const json = JSON.parse(await readFile(path.join(outDir, 'handbook.json'), 'utf8'));
+    expect(json.handbook).toEqual({ title: SETTINGS.title, organisation: SETTINGS.organisation, url: site, basePath: BASE, notice: SETTINGS.notice });
+    for (const correlation of correlations) {
+      const folder = path.join(outDir, 'correlations', correlation.slug);
+      const identity = { title: SETTINGS.title, organisation: SETTINGS.organisation, notice: SETTINGS.notice, url: `${site}correlations/${correlation.slug}/` };
+      expect(JSON.parse(await readFile(path.join(folder, 'coefficients.json'), 'utf8')).handbook, correlation.slug).toEqual(identity);
+      const entry = json.correlations.find((item: { slug: string }) => item.slug === correlation.slug);
+      expect(entry.handbook, correlation.slug).toEqual(identity);
+      const line = `Handbook: ${SETTINGS.title}, published by ${SETTINGS.organisation}; page: ${identity.url}`;
+      for (const file of ['coefficients.csv', 'data.csv']) {
+        const lines = (await readFile(path.join(folder, file), 'utf8')).split('\n');
+        expect(lines, `${correlation.slug}/${file}`).toContain(`# ${line}`);
+        expect(lines, `${correlation.slug}/${file}`).toContain(`# Handbook notice: ${SETTINGS.notice}`);
+      }
+      for (const kind of ['python', 'javascript', 'typescript', 'c', 'spreadsheet']) {
+        const download = entry.downloads[kind] as string;
+        const text = await readFile(path.join(outDir, ...download.slice(BASE.length).split('/')), 'utf8');
+        expect(text, `${correlation.slug} ${kind}`).toContain(line);
+        expect(text, `${correlation.slug} ${kind}`).toContain(`Handbook notice: ${SETTINGS.notice}`);
+      }
+    }
+  });
 });
 
 describe('the browser only draws', () => {

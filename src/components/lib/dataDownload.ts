@@ -5,7 +5,7 @@
  * return) are quoted and prefixed with an apostrophe, common practice for CSV exports.
  */
 import { cautionsFor } from '../../core/index.ts';
-import { spreadsheetSafeText } from '../../export/index.ts';
+import { spreadsheetSafeText, type HandbookIdentity } from '../../export/index.ts';
 import { dataRows } from './dataRows.ts';
 import { INVENTED_NOTICE, pointsOf, unitSuffix, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
 
@@ -25,15 +25,20 @@ function comment(text: string): string {
 }
 
 /**
+ * @param handbook the handbook identity the file names in its comment lines (handbookIdentity.ts)
  * @example dataCsv(entry, fit).split('\n').find((line) => !line.startsWith('#')) // => "row,line,x,y,uncertainty,used,…"
  */
-export function dataCsv(entry: CorrelationEntry, fit: PolynomialFit): string {
+export function dataCsv(entry: CorrelationEntry, fit: PolynomialFit, handbook?: HandbookIdentity): string {
   const { meta } = entry;
   const lines: string[] = [];
   if (meta.invented) lines.push(comment(INVENTED_NOTICE.replace(/^Invented data:/, 'INVENTED DATA:')));
   const unit = unitSuffix(meta.variable.unit).trim();
   for (const caution of cautionsFor(entry.range, unit, meta.variable.name)) lines.push(comment(`CAUTION: ${caution}`));
   lines.push(comment(`Title: ${meta.title}`));
+  if (handbook !== undefined) {
+    lines.push(comment(`Handbook: ${handbook.title}${handbook.organisation ? `, published by ${handbook.organisation}` : ''}; page: ${handbook.url}`));
+    if (handbook.notice) lines.push(comment(`Handbook notice: ${handbook.notice}`));
+  }
   lines.push(comment(`x: ${meta.variable.name} [${meta.variable.unit}]; y: ${meta.property.name} [${meta.property.unit}]; values as written in the data file`));
   lines.push(comment(`Source: ${meta.source.citation}`));
   lines.push(comment(`Diagnostics of the order-${fit.order} fit: residual = y - fitted y [${meta.property.unit}]; empty for rows left out`));

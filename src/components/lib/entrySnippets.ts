@@ -11,6 +11,7 @@ import {
   snippetIdentifier,
   snippetSource,
   spreadsheetSnippet,
+  type HandbookIdentity,
 } from '../../export/index.ts';
 import { entryRecord } from './entryRecord.ts';
 import { fitOf, type CorrelationEntry } from './entryView.ts';
@@ -30,11 +31,14 @@ export function snippetFiles(slug: string): Record<string, string> {
   return { python: `${name}.py`, javascript: `${name}.mjs`, typescript: `${name}.d.mts`, c: `${name}.h`, spreadsheet: `${name}.formula.txt` };
 }
 
-/** @throws Error when the entry has no fit */
-export function entrySnippets(entry: CorrelationEntry): EntrySnippet[] {
+/**
+ * @param handbook the handbook identity the snippets' headers carry (handbookIdentity.ts)
+ * @throws Error when the entry has no fit
+ */
+export function entrySnippets(entry: CorrelationEntry, handbook?: HandbookIdentity): EntrySnippet[] {
   const fit = fitOf(entry);
   if (fit === null) throw new Error(`entrySnippets requires a fit; ${entry.slug} has none`);
-  const source = snippetSource(fit, entryRecord(entry), `Correlary ${version}`);
+  const source = snippetSource(fit, entryRecord(entry, handbook), `Correlary ${version}`);
   const files = snippetFiles(entry.slug);
   return [
     { kind: 'python', label: 'Python', file: files['python']!, contentType: 'text/x-python', text: pythonSnippet(source) },

@@ -31,7 +31,7 @@ export async function handbookExport(site: URL | undefined, include: (entry: Cor
       notice: settings.notice,
     },
     correlations: entries.map((entry) => ({
-      record: entryRecord(entry),
+      record: entryRecord(entry, { title: settings.title, organisation: settings.organisation ?? null, notice: settings.notice ?? null, url: new URL(`${base}correlations/${entry.slug}/`, site ?? settings.url).href }),
       url: `${base}correlations/${entry.slug}/`,
       downloads: correlationDownloads(entry, base),
     })),
