@@ -13,7 +13,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { HyperFormula } from 'hyperformula';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { bands, type PolynomialFit } from '../../src/core/index.ts';
+import { applyMap, bands, fromDouble, scaleConversion, toNumber, type PolynomialFit } from '../../src/core/index.ts';
 import {
   correlationRecord,
   cSnippet,
@@ -27,8 +27,19 @@ import {
 } from '../../src/export/index.ts';
 import { fitHandbook } from '../../src/load/index.ts';
 
+/** One scale of a temperature correlation: its check values (exact evaluation of the re-expressed certified
+ * coefficients, independent of the snippets' mapped-form evaluation) and two x just outside its range. */
+interface ScaleCase {
+  readonly scale: 'K' | '°C' | '°F';
+  readonly native: boolean;
+  readonly xs: number[];
+  readonly ys: number[];
+  readonly outside: [number, number];
+}
+
 interface Case {
   readonly name: string;
+  readonly scales: ScaleCase[];
   readonly record: CorrelationRecord;
   readonly fit: PolynomialFit;
   readonly xs: number[];
@@ -64,11 +75,46 @@ beforeAll(async () => {
     writeFileSync(path.join(directory, `${name}.mjs`), javascriptSnippet(source));
     writeFileSync(path.join(directory, `${name}.h`), cSnippet(source));
     const span = fit.range.max - fit.range.min;
-    cases.push({ name, record: rec, fit, xs: rec.checkValues.map((check) => check.x!), outside: [fit.range.min - span * 1e-9, fit.range.max + span * 1e-9] });
+    const scales = (rec.temperatureScales?.scales ?? []).map((form) => {
+      const width = form.range.max! - form.range.min!;
+      return {
+        scale: form.scale,
+        native: form.native,
+        xs: form.checkValues.map((check) => check.x!),
+        ys: form.checkValues.map((check) => check.y!),
+        outside: [form.range.min! - width * 1e-9, form.range.max! + width * 1e-9] as [number, number],
+      };
+    });
+    cases.push({ name, scales, record: rec, fit, xs: rec.checkValues.map((check) => check.x!), outside: [fit.range.min - span * 1e-9, fit.range.max + span * 1e-9] });
   }
 });
 
+/** language → "slug scale" → worst relative error at that scale's check values. */
+const worstInScale: Record<string, Record<string, number>> = {};
+
+function recordScale(language: string, item: Case, scale: ScaleCase, values: readonly number[]): number {
+  const max = Math.max(...scale.ys.map((y, i) => relative(values[i]!, y)));
+  (worstInScale[language] ??= {})[`${item.record.slug} ${scale.scale}`] = max;
+  return max;
+}
+
+/** The cases with temperature scales, as [name, [[scale, xs, outside], …]] for the drivers. */
+function scaleJobs() {
+  return cases.filter((item) => item.scales.length > 0).map((item) => [item.name, item.scales.map((scale) => [scale.scale, scale.xs, scale.outside])]);
+}
+
 afterAll(() => {
+  const scaleLanguages = Object.keys(worstInScale);
+  if (scaleLanguages.length > 0) {
+    const lines = [`correlation | scale | ${scaleLanguages.join(' | ')}`, `--- | --- | ${scaleLanguages.map(() => '---:').join(' | ')}`];
+    for (const item of cases) {
+      for (const scale of item.scales) {
+        const key = `${item.record.slug} ${scale.scale}`;
+        lines.push(`${item.record.slug} | ${scale.scale}${scale.native ? ' (native)' : ''} | ${scaleLanguages.map((language) => (worstInScale[language]?.[key] ?? NaN).toExponential(1)).join(' | ')}`);
+      }
+    }
+    console.log(`worst relative error at each temperature scale's check values:\n${lines.join('\n')}`);
+  }
   const languages = Object.keys(worst);
   if (languages.length > 0) {
     const lines = [`correlation | ${languages.join(' | ')}`, `--- | ${languages.map(() => '---:').join(' | ')}`];
@@ -182,6 +228,113 @@ console.log(JSON.stringify(out));`;
       expect(values.every((value) => typeof value === 'number'), `${item.name}: ${JSON.stringify(values)}`).toBe(true);
       expect(record('spreadsheet', item, values as number[]), item.name).toBeLessThanOrEqual(1e-12);
       for (const x of item.outside) expect((at(x) as { type?: string }).type, `${item.name} at ${x}`).toBe('NA');
+    }
+    engine.destroy();
+  });
+
+  it('every temperature correlation gives snippets that take the scale of x: python3, node, gcc and the formula engine reproduce each scale\'s check values to 1e-12 relative and refuse just outside that scale\'s range', () => {
+    const jobs = scaleJobs();
+    expect(jobs.length).toBeGreaterThanOrEqual(11);
+    const byName = new Map(cases.map((item) => [item.name, item]));
+
+    // Python: evaluate(x, scale=…), prediction_interval(x, scale=…).
+    const python = `import importlib.util, json, sys
+out = {}
+for name, scales in json.loads(sys.argv[1]):
+    spec = importlib.util.spec_from_file_location(name, "${directory}/" + name + ".py")
+    module = importlib.util.module_from_spec(spec)
+    spec.loader.exec_module(module)
+    for scale, xs, outside in scales:
+        refused = []
+        for x in outside:
+            try:
+                module.evaluate(x, scale=scale)
+                refused.append(False)
+            except ValueError:
+                refused.append(True)
+        out[name + " " + scale] = {"y": [repr(module.evaluate(x, scale=scale)) for x in xs], "pi": [list(map(repr, module.prediction_interval(x, scale=scale))) for x in xs], "refused": refused}
+    try:
+        module.evaluate(module.X_MIN, scale="R")
+        out[name + " unknown"] = False
+    except ValueError:
+        out[name + " unknown"] = True
+print(json.dumps(out))
+`;
+    const fromPython = JSON.parse(execFileSync('python3', ['-c', python, JSON.stringify(jobs)], { encoding: 'utf8' })) as Record<string, { y: string[]; pi: string[][]; refused: boolean[] } | boolean>;
+
+    // JavaScript: evaluate(x, { scale }), predictionInterval(x, { scale }).
+    const javascript = `const out = {};
+for (const [name, scales] of JSON.parse(process.argv[1])) {
+  const module = await import(${JSON.stringify(`${directory}/`)} + name + '.mjs');
+  for (const [scale, xs, outside] of scales) {
+    const refused = outside.map((x) => { try { module.evaluate(x, { scale }); return false; } catch (error) { return error instanceof RangeError; } });
+    out[name + ' ' + scale] = { y: xs.map((x) => module.evaluate(x, { scale })), pi: xs.map((x) => module.predictionInterval(x, { scale })), refused };
+  }
+  try { module.evaluate(module.X_MIN, { scale: 'R' }); out[name + ' unknown'] = false; } catch (error) { out[name + ' unknown'] = error instanceof TypeError; }
+  out[name + ' default'] = module.evaluate(module.X_MIN) === module.evaluate(module.X_MIN, { scale: module.NATIVE_SCALE });
+}
+console.log(JSON.stringify(out));`;
+    const fromNode = JSON.parse(execFileSync(process.execPath, ['--input-type=module', '-e', javascript, JSON.stringify(jobs)], { encoding: 'utf8' })) as Record<string, { y: number[]; pi: number[][]; refused: boolean[] } | boolean>;
+
+    // C: <name>_evaluate_in(x, <NAME>_KELVIN | _CELSIUS | _FAHRENHEIT, &y).
+    const constant = { K: 'KELVIN', '°C': 'CELSIUS', '°F': 'FAHRENHEIT' } as const;
+    const calls = jobs.flatMap(([name]) => {
+      const item = byName.get(name as string)!;
+      return [
+        ...item.scales.flatMap((scale) => [
+          ...scale.xs.map((x) => `  if (${name}_evaluate_in(${x}, ${(name as string).toUpperCase()}_${constant[scale.scale]}, &y) != 0) {\n    return 3;\n  }\n  printf("%s %s %.17g\\n", "${name}", "${constant[scale.scale]}", y);`),
+          ...scale.outside.map((x) => `  printf("%s %s refused %d\\n", "${name}", "${constant[scale.scale]}", ${name}_evaluate_in(${x}, ${(name as string).toUpperCase()}_${constant[scale.scale]}, &y));`),
+        ]),
+        `  printf("%s unknown %d\\n", "${name}", ${name}_evaluate_in(${item.record.range.min}, 7, &y));`,
+      ];
+    });
+    const program = `#include <stdio.h>\n${jobs.map(([name]) => `#include "${name}.h"`).join('\n')}\nint main(void) {\n  double y = 0.0;\n${calls.join('\n')}\n  return 0;\n}\n`;
+    writeFileSync(path.join(directory, 'scales.c'), program);
+    const binary = path.join(directory, 'scales');
+    execFileSync('gcc', ['-std=c99', '-pedantic', '-Wall', '-Wextra', '-Werror', '-Wno-unused-function', '-Wno-unused-const-variable', '-o', binary, path.join(directory, 'scales.c'), '-lm']);
+    const cLines = execFileSync(binary, { encoding: 'utf8' }).trim().split('\n').map((line) => line.split(' '));
+
+    // Spreadsheet: the formula for each scale, x in the named cell.
+    const engine = HyperFormula.buildEmpty({ licenseKey: 'gpl-v3', smartRounding: false });
+    const sheet = engine.getSheetId(engine.addSheet('Sheet1'))!;
+    engine.addNamedExpression(SPREADSHEET_X_NAME, '=Sheet1!$A$1');
+
+    for (const [name] of jobs) {
+      const item = byName.get(name as string)!;
+      const native = item.record.temperatureScales!.native;
+      for (const scale of item.scales) {
+        const key = `${name} ${scale.scale}`;
+        const py = fromPython[key] as { y: string[]; pi: string[][]; refused: boolean[] };
+        expect(recordScale('Python', item, scale, py.y.map(Number)), key).toBeLessThanOrEqual(1e-12);
+        expect(py.refused, key).toEqual([true, true]);
+        const js = fromNode[key] as { y: number[]; pi: number[][]; refused: boolean[] };
+        expect(recordScale('JavaScript', item, scale, js.y), key).toBeLessThanOrEqual(1e-12);
+        expect(js.refused, key).toEqual([true, true]);
+        // The prediction interval at x in this scale is the core's bands() at the same temperature in the native scale
+        // (converted exactly, rounded once).
+        const nativeXs = scale.xs.map((x) => toNumber(applyMap(scaleConversion(scale.scale, native), fromDouble(x))));
+        const expected = bands(item.fit, nativeXs.map((x) => Math.min(item.fit.range.max, Math.max(item.fit.range.min, x))));
+        expected.forEach((band, i) => {
+          expect(relative(Number(py.pi[i]![0]), band.predictionLow), `${key} Python PI`).toBeLessThan(1e-9);
+          expect(relative(js.pi[i]![1]!, band.predictionHigh), `${key} JavaScript PI`).toBeLessThan(1e-9);
+        });
+        const mine = cLines.filter((parts) => parts[0] === name && parts[1] === constant[scale.scale]);
+        expect(recordScale('C', item, scale, mine.filter((parts) => parts[2] !== 'refused').map((parts) => Number(parts[2]))), key).toBeLessThanOrEqual(1e-12);
+        expect(mine.filter((parts) => parts[2] === 'refused').map((parts) => parts[3]), key).toEqual(['1', '1']);
+        const formula = spreadsheetFormula(item.record, SPREADSHEET_X_NAME, scale.scale);
+        const at = (x: number) => {
+          engine.setCellContents({ sheet, row: 0, col: 0 }, [[x, formula]]);
+          return engine.getCellValue({ sheet, row: 0, col: 1 });
+        };
+        const values = scale.xs.map(at);
+        expect(values.every((value) => typeof value === 'number'), `${key}: ${JSON.stringify(values)}`).toBe(true);
+        expect(recordScale('spreadsheet', item, scale, values as number[]), key).toBeLessThanOrEqual(1e-12);
+        for (const x of scale.outside) expect((at(x) as { type?: string }).type, `${key} at ${x}`).toBe('NA');
+      }
+      expect(fromPython[`${name} unknown`], `${name}: Python refuses an unknown scale`).toBe(true);
+      expect(fromNode[`${name} unknown`], `${name}: JavaScript refuses an unknown scale`).toBe(true);
+      expect(fromNode[`${name} default`], `${name}: the default scale is the native one`).toBe(true);
+      expect(cLines.find((parts) => parts[0] === name && parts[1] === 'unknown')?.[2], `${name}: C refuses an unknown scale`).toBe('3');
     }
     engine.destroy();
   });

@@ -27,6 +27,7 @@ import { describeChart } from './chartChecks.ts';
 import { describeListings } from './listingChecks.ts';
 import { describeNumbers } from './numberChecks.ts';
 import { describeEvaluator } from './evaluatorChecks.ts';
+import { describeScales } from './scaleChecks.ts';
 import { describeReading } from './readingChecks.ts';
 import { serveDirectory } from './staticServer.ts';
 
@@ -594,3 +595,5 @@ describeListings(() => ({ outDir, content: path.join(workDir, 'content'), correl
 describe.skipIf(!existsSync(CHROMIUM))('the evaluator and the copy buttons (test/site/evaluatorChecks.ts)', () => {
   describeEvaluator(() => ({ siteRoot, outDir, base: BASE, correlations }));
 });
+
+describeScales(() => ({ siteRoot, outDir, base: BASE }));

@@ -1,11 +1,13 @@
 /**
  * The Python module of a correlation (standard library only): `evaluate(x)` and `prediction_interval(x)`, both
- * raising ValueError outside the validity range. Evaluation: transform x, map to t, Horner's rule on the mapped
+ * raising ValueError outside the validity range. Where x is a temperature both take `scale="K" | "°C" | "°F"` (default
+ * the scale of the fit): the range and the mapped variable of that scale are used. Evaluation: transform x, map to t, Horner's rule on the mapped
  * coefficients at full precision, back-transform y. The 95 % prediction interval is v ± q·√(φᵀΣφ + σ_new(x)²)
  * in the fitted space (NIST/SEMATECH e-Handbook §4.5.2.2), taken back through the y transform.
  *
  * @example pythonSnippet(source).includes('def evaluate(x') // => true
  */
+import { scaleHeaderLines, snippetScales } from './snippetScales.ts';
 import { headerLines, identifier, literal } from './snippetText.ts';
 import type { SnippetSource } from './snippetSource.ts';
 
@@ -17,7 +19,36 @@ export function pythonSnippet(source: SnippetSource): string {
   const covariance = m.covariance.map((row) => list(row.map((value) => value ?? 0))).join(',\n    ');
   const u = r.transforms.x === 'identity' ? 'x' : r.transforms.x === 'reciprocal' ? '1.0 / x' : 'math.log(x)';
   const back = r.transforms.y === 'log' ? 'math.exp' : '';
-  return `${headerLines(source, 'Python module').map((line) => `# ${line}`.trimEnd()).join('\n')}
+  const scales = snippetScales(r);
+  const native = scales?.find((entry) => entry.native)?.scale;
+  const scaleTable =
+    scales === null
+      ? ''
+      : `NATIVE_SCALE = "${native}"
+# scale: (x_min, x_max, center, half_width) in that scale
+SCALES = {${scales.map((entry) => `"${entry.scale}": ${list([entry.min, entry.max, entry.center, entry.halfWidth])}`).join(', ')}}
+`;
+  const t =
+    scales === null
+      ? `def _t(x):
+    if not isinstance(x, (int, float)) or isinstance(x, bool) or math.isnan(x):
+        raise ValueError("x must be a number")
+    if x < X_MIN or x > X_MAX:
+        raise ValueError("x = %r is outside the validity range [%r, %r]; the correlation is valid only inside it" % (x, X_MIN, X_MAX))
+    return (${u} - CENTER) / HALF_WIDTH`
+      : `def _t(x, scale=NATIVE_SCALE):
+    if not isinstance(x, (int, float)) or isinstance(x, bool) or math.isnan(x):
+        raise ValueError("x must be a number")
+    if scale not in SCALES:
+        raise ValueError("scale must be one of %s, got %r" % (", ".join(SCALES), scale))
+    x_min, x_max, center, half_width = SCALES[scale]
+    if x < x_min or x > x_max:
+        raise ValueError("x = %r %s is outside the validity range [%r, %r] %s; the correlation is valid only inside it" % (x, scale, x_min, x_max, scale))
+    return (x - center) / half_width`;
+  const arg = scales === null ? 'x' : 'x, scale=NATIVE_SCALE';
+  const call = scales === null ? 'x' : 'x, scale';
+  const nativeX = scales === null ? 'x' : 'CENTER + HALF_WIDTH * t';
+  return `${[...headerLines(source, 'Python module'), ...scaleHeaderLines(r, 'evaluate(x, scale="°F")')].map((line) => `# ${line}`.trimEnd()).join('\n')}
 """Correlation ${identifier(r.slug)}: evaluate(x) and prediction_interval(x); see the comments above."""
 import math
 
@@ -33,14 +64,9 @@ COVARIANCE = (
 QUANTILE = ${Number.isFinite(source.quantile) ? literal(source.quantile) : 'float("nan")'}
 NOISE_X = ${list(source.profileX)}
 NOISE_SD = ${list(source.profileSd)}
+${scaleTable}
 
-
-def _t(x):
-    if not isinstance(x, (int, float)) or isinstance(x, bool) or math.isnan(x):
-        raise ValueError("x must be a number")
-    if x < X_MIN or x > X_MAX:
-        raise ValueError("x = %r is outside the validity range [%r, %r]; the correlation is valid only inside it" % (x, X_MIN, X_MAX))
-    return (${u} - CENTER) / HALF_WIDTH
+${t}
 
 
 def _horner(t):
@@ -50,9 +76,9 @@ def _horner(t):
     return v
 
 
-def evaluate(x):
+def evaluate(${arg}):
     """y at x; raises ValueError outside the validity range."""
-    return ${back}(_horner(_t(x)))
+    return ${back}(_horner(_t(${call})))
 
 
 def _noise_sd(x):
@@ -65,12 +91,12 @@ def _noise_sd(x):
     return NOISE_SD[-1]
 
 
-def prediction_interval(x):
+def prediction_interval(${arg}):
     """(low, high): the 95 % prediction interval of a new observation at x; raises ValueError outside the range."""
-    t = _t(x)
+    t = _t(${call})
     phi = [t ** k for k in range(len(B))]
     var_fit = sum(phi[j] * COVARIANCE[j][k] * phi[k] for j in range(len(B)) for k in range(len(B)))
-    half = QUANTILE * math.sqrt(max(0.0, var_fit) + _noise_sd(x) ** 2)
+    half = QUANTILE * math.sqrt(max(0.0, var_fit) + _noise_sd(${nativeX}) ** 2)
     v = _horner(t)
     return (${back}(v - half), ${back}(v + half))
 `;
