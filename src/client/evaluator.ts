@@ -7,6 +7,7 @@
  */
 import { evaluatorSubject, type EvaluatorSubject } from './evaluatorModel.ts';
 import { evaluatorResult } from './evaluatorResult.ts';
+import { subjectInScale } from './evaluatorScale.ts';
 
 function element<K extends keyof HTMLElementTagNameMap>(tag: K, properties: Partial<HTMLElementTagNameMap[K]> = {}, children: (Node | string)[] = []): HTMLElementTagNameMap[K] {
   const node = Object.assign(document.createElement(tag), properties);
@@ -15,7 +16,8 @@ function element<K extends keyof HTMLElementTagNameMap>(tag: K, properties: Part
 }
 
 /** The evaluator's section for one subject, wired up; not yet in the document. */
-export function buildEvaluator(subject: EvaluatorSubject): HTMLElement {
+export function buildEvaluator(nativeSubject: EvaluatorSubject, snippet = ''): HTMLElement {
+  let subject = nativeSubject;
   const { model, xName, xUnit } = subject;
   const input = element('input', { id: 'evaluator-x', type: 'text', inputMode: 'decimal', autocomplete: 'off', spellcheck: false, required: true });
   const extrapolate = element('input', { id: 'evaluator-extrapolate', type: 'checkbox' });
@@ -23,8 +25,9 @@ export function buildEvaluator(subject: EvaluatorSubject): HTMLElement {
   result.setAttribute('aria-live', 'polite');
   result.setAttribute('role', 'status');
   const unit = xUnit ? ` (${xUnit})` : '';
+  const label = element('label', { htmlFor: 'evaluator-x' }, [`${xName}${unit}`]);
   const form = element('form', { className: 'evaluator-form', noValidate: true }, [
-    element('label', { htmlFor: 'evaluator-x' }, [`${xName}${unit}`]),
+    label,
     ' ',
     input,
     ' ',
@@ -67,14 +70,21 @@ export function buildEvaluator(subject: EvaluatorSubject): HTMLElement {
   });
   extrapolate.addEventListener('change', show);
 
-  return element('section', { className: 'evaluator' }, [
-    element('h2', { id: 'evaluate' }, ['Evaluate']),
-    element('p', { id: 'evaluator-range' }, [
-      `Type ${xName} and press Evaluate: ${subject.yName} with its 95 % confidence interval (of the correlation) and 95 % prediction interval (of a new measurement), from the full-precision mapped form and its covariance — the same numbers as the code below. Validity range: ${model.min} to ${model.max}${xUnit ? ` ${xUnit}` : ''}.`,
-    ]),
-    form,
-    result,
-  ]);
+  const rangeText = () =>
+    `Type ${xName} and press Evaluate: ${subject.yName} with its 95 % confidence interval (of the correlation) and 95 % prediction interval (of a new measurement), from the full-precision mapped form and its covariance — the same numbers as the code below. Validity range: ${subject.model.min} to ${subject.model.max}${subject.xUnit ? ` ${subject.xUnit}` : ''}.`;
+  const range = element('p', { id: 'evaluator-range' }, [rangeText()]);
+  // Follow the temperature scale chosen on the page (src/client/temperatureScale.ts): x, range and answer in it.
+  document.addEventListener('correlary:scale', (event) => {
+    const chosen = subjectInScale(nativeSubject, snippet, String((event as CustomEvent<{ scale: string }>).detail?.scale));
+    if (chosen === null) return;
+    subject = chosen;
+    label.textContent = `${xName}${subject.xUnit ? ` (${subject.xUnit})` : ''}`;
+    input.placeholder = `${subject.model.min} to ${subject.model.max}`;
+    range.textContent = rangeText();
+    show();
+  });
+
+  return element('section', { className: 'evaluator' }, [element('h2', { id: 'evaluate' }, ['Evaluate']), range, form, result]);
 }
 
 /** Build the evaluator from the page's `[data-evaluator]` element and put it after the plots (or the equation). */
@@ -83,7 +93,7 @@ export function mountEvaluator(root: Document = document): void {
   const anchor = root.querySelector('section[aria-labelledby="plots"]') ?? root.querySelector('section[aria-labelledby="equation"]');
   if (source === null || anchor === null) return;
   try {
-    const section = buildEvaluator(evaluatorSubject(source));
+    const section = buildEvaluator(evaluatorSubject(source), source.querySelector('#snippet-javascript')?.textContent ?? '');
     section.setAttribute('aria-labelledby', 'evaluate');
     anchor.after(section);
   } catch (caught) {

@@ -216,7 +216,8 @@ export function describeEvaluator(context: () => EvaluatorContext): void {
       const sections = page.locator('.code-snippets details');
       // Python, JavaScript, C and the spreadsheet formula at least (the TypeScript declarations may be a download only).
       const count = await sections.count();
-      expect(count).toBeGreaterThanOrEqual(4);
+      expect(count).toBe(4);
+      expect(await page.locator('.code-snippets a[download][href$=".d.mts"]').count()).toBe(1);
       for (let i = 0; i < count; i++) {
         const details = sections.nth(i);
         const file = (await details.locator('summary code').textContent())!;
@@ -228,7 +229,7 @@ export function describeEvaluator(context: () => EvaluatorContext): void {
         const downloaded = await readFile(path.join(given.outDir, 'correlations', target.slug, file), 'utf8');
         expect(copied, file).toBe(downloaded);
         // The download link on the page points at that file.
-        expect(await details.locator('a[download]').getAttribute('href')).toBe(`${given.base}correlations/${target.slug}/${file}`);
+        expect(await details.locator('a[download]').first().getAttribute('href')).toBe(`${given.base}correlations/${target.slug}/${file}`);
       }
       expect(errors).toEqual([]);
       await browserContext.close();

@@ -5,7 +5,9 @@
  * temperatureScales), exposes the choice as data-scale on the article and a `correlary:scale` event, and keeps the
  * two switches in step; going back restores the page. The coefficients the table shows are then evaluated in
  * Python's fractions at that scale's check points and must reproduce its printed check values within their
- * tolerance (an independent evaluation of what the reader sees). Run from site.test.ts on the site it builds.
+ * tolerance (an independent evaluation of what the reader sees). The page's evaluator follows the chosen scale: a
+ * value typed in K at a K check point gives that check value, and x beyond the K range is refused. Run from
+ * site.test.ts on the site it builds.
  */
 import { execFileSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
@@ -30,6 +32,8 @@ interface ScaleForm {
   significantDigits: number[];
   mapped: { center: number; halfWidth: number };
   printedCheckValues: { x: number; y: string; tolerance: number }[];
+  checkValues: { x: number; y: number }[];
+  range: { min: number; max: number };
 }
 
 export function describeScales(context: () => ScaleContext): void {
@@ -94,15 +98,27 @@ export function describeScales(context: () => ScaleContext): void {
 
         // Independent check of what the reader now sees: the table's K coefficients, evaluated exactly in Python,
         // reproduce the K printed check values of handbook.json within their tolerance.
-        const values = JSON.parse(
+        const printedValues = JSON.parse(
           execFileSync('python3', ['-c', 'import json, sys\nfrom fractions import Fraction as F\njob = json.load(sys.stdin)\nprint(json.dumps([float(sum(F(a) * F(x) ** k for k, a in enumerate(job["a"]))) for x in job["x"]]))'], {
             input: JSON.stringify({ a: after.map((row) => row[1]), x: kelvin.printedCheckValues.map((check) => String(check.x)) }),
             encoding: 'utf8',
           }),
         ) as number[];
-        kelvin.printedCheckValues.forEach((check, i) => expect(Math.abs(values[i]! - Number(check.y)), `K check at ${check.x}`).toBeLessThanOrEqual(check.tolerance));
+        kelvin.printedCheckValues.forEach((check, i) => expect(Math.abs(printedValues[i]! - Number(check.y)), `K check at ${check.x}`).toBeLessThanOrEqual(check.tolerance));
 
-        await page.locator('fieldset.scale-switch').nth(1).getByLabel('°C (fitted)').check();
+        // The evaluator follows: x is read in K, its range is K's, and y at a K check point is that check value.
+        const check = kelvin.checkValues[2]!;
+        await page.locator('#evaluator-x').fill(String(check.x));
+        await page.getByRole('button', { name: 'Evaluate', exact: true }).click();
+        const values = page.locator('#evaluator-result .evaluator-values');
+        await values.waitFor({ timeout: 5_000 });
+        expect(Math.abs(Number(await values.getAttribute('data-y')) - check.y) / Math.abs(check.y), `evaluator at ${check.x} K`).toBeLessThan(1e-12);
+        expect(await page.locator('#evaluator-range').textContent()).toContain(`${kelvin.range.min} to ${kelvin.range.max} K`);
+        await page.locator('#evaluator-x').fill(String(kelvin.range.max + 1));
+        await page.getByRole('button', { name: 'Evaluate', exact: true }).click();
+        await page.locator('#evaluator-result .evaluator-refused').waitFor({ timeout: 5_000 });
+
+                await page.locator('fieldset.scale-switch').nth(1).getByLabel('°C (fitted)').check();
         expect(await page.locator('article.correlation').getAttribute('data-scale')).toBe('°C');
         expect(await cells()).toEqual(before);
         expect(await page.locator('.equation-plain-row[data-form="printed"] code').textContent()).toBe(plainBefore);
