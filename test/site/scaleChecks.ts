@@ -82,6 +82,8 @@ export function describeScales(context: () => ScaleContext): void {
         expect(await page.locator('article.correlation').getAttribute('data-scale')).toBe('K');
         expect(await page.evaluate(() => (window as unknown as { scaleEvents: unknown[] }).scaleEvents)).toEqual([{ scale: 'K', native: '°C' }]);
         expect(await page.locator('.equation[data-plain]').isVisible()).toBe(false);
+        // The full-precision plain form is the fitted scale's; it is not shown beside another scale's equation.
+        expect(await page.locator('.equation-plain-row[data-form="full"]').isVisible()).toBe(false);
         const scaled = page.locator('.equation-scaled');
         expect(await scaled.isVisible()).toBe(true);
         const after = await cells();
@@ -123,6 +125,8 @@ export function describeScales(context: () => ScaleContext): void {
         expect(await cells()).toEqual(before);
         expect(await page.locator('.equation-plain-row[data-form="printed"] code').textContent()).toBe(plainBefore);
         expect(await page.locator('.equation[data-plain]').isVisible()).toBe(true);
+        expect(await page.locator('.equation-plain-row[data-form="full"]').isVisible()).toBe(true);
+        expect(await page.locator('.equation-scaled').isVisible()).toBe(false);
         expect(errors).toEqual([]);
       } finally {
         await browser.close();
