@@ -51,3 +51,22 @@ export function fitCodeVersion(packageRoot: string): string {
   }
   return hash.digest('hex');
 }
+
+/**
+ * A version of the code that turns cached fits into published files (src/components/lib, src/export, src/render
+ * and what fitCodeVersion covers): SHA-256 of `fitVersion` and of those source files, so that files written by an
+ * older code are rewritten. Where the sources are not present, `fitVersion` alone.
+ * @example filesCodeVersion('.', fitCodeVersion('.')).length // => 64
+ */
+export function filesCodeVersion(packageRoot: string, fitVersion: string): string {
+  const hash = createHash('sha256').update(fitVersion);
+  const files = ['components/lib', 'export', 'render'].flatMap((folder) => sourceFiles(path.join(packageRoot, 'src', folder)));
+  for (const file of files) {
+    try {
+      hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');
+    } catch {
+      // not shipped: the fitting code's version stands for it
+    }
+  }
+  return hash.digest('hex');
+}

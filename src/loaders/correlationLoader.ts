@@ -9,8 +9,12 @@
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Loader, LoaderContext } from 'astro/loaders';
-import { fitHandbook, formatDiagnostic, handbookHistory } from '../load/index.ts';
-import { fitCodeVersion } from '../load/fitCodeVersion.ts';
+import { fitHandbook, formatDiagnostic, handbookHistory, readHandbookSettings } from '../load/index.ts';
+import { identityOf } from '../components/lib/identityOf.ts';
+import { handbookSettingsSchema } from '../schema/index.ts';
+import { filesCodeVersion, fitCodeVersion } from '../load/fitCodeVersion.ts';
+import { writeCorrelationFiles } from './correlationFiles.ts';
+import { correlationFilesFolder } from './correlationFilesIntegration.ts';
 import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -71,10 +75,21 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   }
 
   context.store.clear();
+  const stored: CorrelationEntry[] = [];
   for (const { entry, filePath } of entries) {
     const id = String(entry['slug']);
     const data = await context.parseData({ id, data: entry, filePath });
     context.store.set({ id, data, digest: context.generateDigest(data), filePath });
+    stored.push(data as CorrelationEntry);
+  }
+  // A build writes each correlation's downloads once here (copied into the output at the end); `astro dev`, which
+  // watches the content, serves them from a route instead.
+  if (context.watcher === undefined) {
+    const root = fileURLToPath(context.config.root);
+    // The handbook identity the files carry, as the pages compute it (handbookIdentity.ts) from the same settings.
+    const settings = (await readHandbookSettings(displayDirectory)).settings ?? handbookSettingsSchema.parse({});
+    const identity = (slug: string) => identityOf(slug, settings, context.config.base, context.config.site);
+    await writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity);
   }
   const { readingMs, fittingMs } = handbook.timing;
   const seconds = (ms: number): string => (ms / 1000).toFixed(2);

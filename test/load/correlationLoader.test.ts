@@ -27,7 +27,7 @@ function fakeContext() {
     parseData: async ({ data }: { data: Record<string, unknown> }) => correlationEntrySchema.parse(data),
     generateDigest: (data: unknown) => JSON.stringify(data).length.toString(16),
     logger,
-    config: { root: pathToFileURL(`${process.cwd()}/`), cacheDir: pathToFileURL(`${cacheDir}/`) },
+    config: { root: pathToFileURL(`${process.cwd()}/`), cacheDir: pathToFileURL(`${cacheDir}/`), base: '/', site: 'https://handbook.example.org' },
   } as unknown as LoaderContext;
   return { context, entries, logger };
 }

@@ -5,16 +5,9 @@
  */
 import type { HandbookIdentity } from '../../export/index.ts';
 import { handbookSettings } from './handbookSettings.ts';
+import { identityOf } from './identityOf.ts';
 
 /** @example (await handbookIdentity('water-cp')).url // => "https://handbook.example.org/handbook/correlations/water-cp/" */
 export async function handbookIdentity(slug: string): Promise<HandbookIdentity> {
-  const settings = await handbookSettings();
-  const base = import.meta.env.BASE_URL.replace(/\/?$/, '/');
-  const site = import.meta.env.SITE || settings.url;
-  return {
-    title: settings.title,
-    organisation: settings.organisation ?? null,
-    notice: settings.notice ?? null,
-    url: new URL(`${base}correlations/${slug}/`, site).href,
-  };
+  return identityOf(slug, await handbookSettings(), import.meta.env.BASE_URL, import.meta.env.SITE);
 }

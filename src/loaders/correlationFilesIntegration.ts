@@ -1,0 +1,32 @@
+/**
+ * Astro integration for the per-correlation files (src/loaders/correlationFiles.ts): in a build, copies the files
+ * the content loader wrote into the output when the pages are done; under `astro dev`, serves them through one
+ * route (src/routes/correlationFile.ts) computed on request from the same functions.
+ */
+import { fileURLToPath } from 'node:url';
+import type { AstroIntegration } from 'astro';
+import { copyCorrelationFiles } from './correlationFiles.ts';
+
+/** Where the loader writes the files, inside Astro's cache folder. @example correlationFilesFolder(config.cacheDir) */
+export function correlationFilesFolder(cacheDir: URL): string {
+  return fileURLToPath(new URL('correlary-files/', cacheDir));
+}
+
+/** @example defineConfig({ integrations: [correlationFilesIntegration()] }) */
+export function correlationFilesIntegration(): AstroIntegration {
+  let folder = '';
+  return {
+    name: 'correlary-correlation-files',
+    hooks: {
+      'astro:config:setup': ({ command, injectRoute }) => {
+        if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('../routes/correlationFile.ts', import.meta.url)) });
+      },
+      'astro:config:done': ({ config }) => {
+        folder = correlationFilesFolder(config.cacheDir);
+      },
+      'astro:build:done': async ({ dir }) => {
+        await copyCorrelationFiles(folder, fileURLToPath(dir));
+      },
+    },
+  };
+}
