@@ -1,7 +1,7 @@
 /**
  * correlationLoader(): the Astro adapter, driven with a minimal stand-in for Astro's LoaderContext.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -10,6 +10,8 @@ import { afterAll, describe, expect, it, vi } from 'vitest';
 import { correlationLoader } from '../../src/loaders/correlationLoader.ts';
 import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
 import { fitOf, pointsOf } from '../../src/components/lib/entryView.ts';
+import { correlationFiles } from '../../src/components/lib/correlationFiles.ts';
+import { copyCorrelationFiles, writeCorrelationFiles } from '../../src/loaders/correlationFiles.ts';
 
 /** Astro's cache folder stand-in: the loader caches fits in it and the store refers to them. */
 const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-loader-cache-'));
@@ -53,6 +55,31 @@ describe('correlationLoader()', () => {
     await correlationLoader({ directory: 'test/fixtures/content/valid' }).load(context);
     const data = entries.get('liquid-a')!.data;
     expect(correlationEntrySchema.parse(data)).toEqual(data);
+  });
+
+  it("a build's loader writes each correlation's downloads once; unchanged entries are not rewritten, removed ones are deleted, and the copy into the output holds them", async () => {
+    const { context, entries } = fakeContext();
+    await correlationLoader({ directory: 'content' }).load(context);
+    const folder = path.join(cacheDir, 'correlary-files');
+    const stored = [...entries.values()].map((item) => item.data as CorrelationEntry).filter((entry) => entry.fit !== null);
+    const slugs = stored.map((entry) => entry.slug).sort();
+    expect(readdirSync(folder).sort()).toEqual([...slugs, 'manifest.json'].sort());
+    // The files are those of correlationFiles, byte for byte.
+    const first = stored[0]!;
+    for (const file of correlationFiles(first)) expect(readFileSync(path.join(folder, first.slug, file.file), 'utf8')).toBe(file.text);
+    expect(await writeCorrelationFiles(folder, stored, 'same-version')).toBe(stored.length);
+    expect(await writeCorrelationFiles(folder, stored, 'same-version')).toBe(0);
+    expect(await writeCorrelationFiles(folder, stored.slice(1), 'same-version')).toBe(0);
+    expect(readdirSync(folder)).not.toContain(first.slug);
+    const out = mkdtempSync(path.join(tmpdir(), 'correlary-loader-out-'));
+    try {
+      const copied = await copyCorrelationFiles(folder, out);
+      const second = stored[1]!;
+      expect(copied).toBe(stored.slice(1).reduce((sum, entry) => sum + correlationFiles(entry).length, 0));
+      expect(readdirSync(path.join(out, 'correlations', second.slug)).sort()).toEqual(correlationFiles(second).map((file) => file.file).sort());
+    } finally {
+      rmSync(out, { recursive: true, force: true });
+    }
   });
 
   it('correlationLoader fails the build on any error, logging every message', async () => {
