@@ -11,6 +11,9 @@ import { correlationLoader } from '../../src/loaders/correlationLoader.ts';
 import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
 import { fitOf, pointsOf } from '../../src/components/lib/entryView.ts';
 import { correlationFiles } from '../../src/components/lib/correlationFiles.ts';
+import { identityOf } from '../../src/components/lib/identityOf.ts';
+import { readHandbookSettings } from '../../src/load/index.ts';
+import { handbookSettingsSchema } from '../../src/schema/index.ts';
 import { copyCorrelationFiles, writeCorrelationFiles } from '../../src/loaders/correlationFiles.ts';
 
 /** Astro's cache folder stand-in: the loader caches fits in it and the store refers to them. */
@@ -63,20 +66,25 @@ describe('correlationLoader()', () => {
     const folder = path.join(cacheDir, 'correlary-files');
     const stored = [...entries.values()].map((item) => item.data as CorrelationEntry).filter((entry) => entry.fit !== null);
     const slugs = stored.map((entry) => entry.slug).sort();
+    // The site address set in the configuration wins over the settings' url for the page addresses.
+    const settings = (await readHandbookSettings('content')).settings ?? handbookSettingsSchema.parse({});
+    const identity = (slug: string) => identityOf(slug, settings, '/', 'https://handbook.example.org');
     expect(readdirSync(folder).sort()).toEqual([...slugs, 'manifest.json'].sort());
     // The files are those of correlationFiles, byte for byte.
     const first = stored[0]!;
-    for (const file of correlationFiles(first)) expect(readFileSync(path.join(folder, first.slug, file.file), 'utf8')).toBe(file.text);
-    expect(await writeCorrelationFiles(folder, stored, 'same-version')).toBe(stored.length);
-    expect(await writeCorrelationFiles(folder, stored, 'same-version')).toBe(0);
-    expect(await writeCorrelationFiles(folder, stored.slice(1), 'same-version')).toBe(0);
+    for (const file of correlationFiles(first, identity(first.slug))) expect(readFileSync(path.join(folder, first.slug, file.file), 'utf8')).toBe(file.text);
+    const written = JSON.parse(readFileSync(path.join(folder, first.slug, 'coefficients.json'), 'utf8')) as { handbook: { url: string } };
+    expect(written.handbook.url).toBe(`https://handbook.example.org/correlations/${first.slug}/`);
+    expect(await writeCorrelationFiles(folder, stored, 'same-version', identity)).toBe(stored.length);
+    expect(await writeCorrelationFiles(folder, stored, 'same-version', identity)).toBe(0);
+    expect(await writeCorrelationFiles(folder, stored.slice(1), 'same-version', identity)).toBe(0);
     expect(readdirSync(folder)).not.toContain(first.slug);
     const out = mkdtempSync(path.join(tmpdir(), 'correlary-loader-out-'));
     try {
       const copied = await copyCorrelationFiles(folder, out);
       const second = stored[1]!;
-      expect(copied).toBe(stored.slice(1).reduce((sum, entry) => sum + correlationFiles(entry).length, 0));
-      expect(readdirSync(path.join(out, 'correlations', second.slug)).sort()).toEqual(correlationFiles(second).map((file) => file.file).sort());
+      expect(copied).toBe(stored.slice(1).reduce((sum, entry) => sum + correlationFiles(entry, identity(entry.slug)).length, 0));
+      expect(readdirSync(path.join(out, 'correlations', second.slug)).sort()).toEqual(correlationFiles(second, identity(second.slug)).map((file) => file.file).sort());
     } finally {
       rmSync(out, { recursive: true, force: true });
     }
