@@ -63,18 +63,24 @@ export function lastDigitPlace(value: number, digits: number): number {
 
 /**
  * One end of a coefficient's interval, printed to the same decimal place as the coefficient (at least one
- * significant digit). @example formatToPlace(14.00119432, -5) // => "14.00119"
+ * significant digit). Values of moderate size keep their trailing zeros down to that place, so both ends of an
+ * interval show the same number of decimals.
+ * @example formatToPlace(14.00119432, -5) // => "14.00119"
+ * @example formatToPlace(1801.899, -2) // => "1801.90"
  */
 export function formatToPlace(value: number | null | undefined, place: number): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return formatNumber(value);
   if (value === 0) return '0';
-  const digits = Math.max(1, Math.min(17, Math.floor(Math.log10(Math.abs(value))) - place + 1));
+  const exponent = Math.floor(Math.log10(Math.abs(value)));
+  const digits = Math.max(1, Math.min(17, exponent - place + 1));
+  if (exponent >= -3 && exponent < 6 && place < 0 && exponent >= place) return value.toFixed(Math.min(20, -place));
   return formatCoefficient(value, digits);
 }
 
 /**
  * A coefficient's interval "low to high", each end to the decimal place of the printed coefficient.
- * @example formatInterval([13.7772, 14.0012], 13.88923908, 7) // => "13.7772 to 14.0012"
+ * @example formatInterval([13.7772, 14.0012], 13.88923908, 7) // => "13.77720 to 14.00120"
+ * @example formatInterval([1801.899, 1813.012], 1807.4566, 6) // => "1801.90 to 1813.01"
  */
 export function formatInterval(interval: readonly [number, number] | readonly number[] | undefined, coefficient: number, digits: number): string {
   if (interval === undefined) return MISSING;
