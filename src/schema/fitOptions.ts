@@ -65,6 +65,22 @@ export const CRITERIA = [
   'chiSquare',
 ] as const;
 
+/**
+ * Each criterion's name in words, for readers of the pages (the content format's `criterion:` keeps the short name).
+ * @example CRITERION_TITLES.lowestJustified // => "lowest justified order"
+ */
+export const CRITERION_TITLES: Readonly<Record<(typeof CRITERIA)[number], string>> = {
+  lowestJustified: 'lowest justified order',
+  residualVariance: 'smallest residual variance',
+  adjustedRSquared: 'largest adjusted R²',
+  aicc: 'smallest AICc',
+  bic: 'smallest BIC',
+  press: 'smallest leave-one-out error (PRESS)',
+  sequentialF: 'sequential F test',
+  allHigherF: 'lowest order that no higher order improves on',
+  chiSquare: 'χ² consistency with the stated uncertainties',
+};
+
 /** One of {@link CRITERIA}. */
 export const criterionSchema = z.enum(CRITERIA).describe('Order-selection criterion');
 

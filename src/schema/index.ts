@@ -38,6 +38,7 @@ export {
   transformSchema,
   criterionSchema,
   CRITERIA,
+  CRITERION_TITLES,
   ORDER_LIMIT,
 } from './fitOptions.ts';
 export type { FitSettings, FitOptionsInput, PassThrough, Exclusion, FitOptionRuleProblem } from './fitOptions.ts';

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { orderCriteria } from '../../src/core/index.ts';
-import { CRITERIA, correlationMetaSchema, correlationEntrySchema, type CorrelationMetaInput } from '../../src/schema/index.ts';
+import { CRITERIA, CRITERION_TITLES, correlationMetaSchema, correlationEntrySchema, type CorrelationMetaInput } from '../../src/schema/index.ts';
 
 const MINIMAL: CorrelationMetaInput = Object.freeze({
   title: 'Density of test liquid',
@@ -82,6 +82,11 @@ describe('correlationMetaSchema', () => {
 
   it('CRITERIA lists exactly the order selector criteria', () => {
     expect([...CRITERIA].sort()).toEqual(Object.keys(orderCriteria).sort());
+  });
+
+  it('every criterion has a title in words for the pages, and no title is its short name', () => {
+    expect(Object.keys(CRITERION_TITLES).sort()).toEqual([...CRITERIA].sort());
+    for (const name of CRITERIA) expect(CRITERION_TITLES[name], name).not.toMatch(/[a-z][A-Z]/);
   });
 
   it('correlationEntrySchema documents its fields too', () => {
