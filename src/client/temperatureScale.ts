@@ -14,6 +14,7 @@
  *
  * @example mountTemperatureScale() // adds "Scale: K | °C | °F" radio buttons above the equation and the table
  */
+import { formatInterval, formatNumber } from '../core/browser.ts';
 
 /** One scale's published form on the page (keys kept short: every page has a size budget). */
 interface ScaleData {
@@ -39,12 +40,6 @@ interface PageData {
   y: string;
   q: number;
   o: ScaleData[];
-}
-
-/** A number to the decimal place of the last printed digit of a coefficient with `digits` significant digits. */
-function toPlace(value: number, coefficient: number, digits: number): string {
-  const place = Math.floor(Math.log10(Math.abs(coefficient) || 1)) - digits + 1;
-  return place < 0 ? value.toFixed(Math.min(100, -place)) : String(Math.round(value / 10 ** place) * 10 ** place);
 }
 
 /** The plain-text equation "y = a0 + a1*T + a2*T^2", as the page's plain form prints it. */
@@ -113,8 +108,10 @@ export function mountTemperatureScale(root: Document = document): void {
       const error = entry.e![k]!;
       text(1, entry.a[k]!);
       text(2, String(digits));
-      text(3, error.toPrecision(3).replace(/\.?0+(e|$)/, '$1'));
-      text(4, `${toPlace(a - data.q * error, a, digits)} to ${toPlace(a + data.q * error, a, digits)}`);
+      // The same rules as the native table (CoefficientTable.astro): 3 digits of the standard error, each end of
+      // the interval to the decimal place of the printed coefficient.
+      text(3, formatNumber(error, 3));
+      text(4, formatInterval([a - data.q * error, a + data.q * error], a, digits));
     });
     if (centre) centre.textContent = entry ? String(entry.c) : original.centre;
     if (halfWidth) halfWidth.textContent = entry ? String(entry.h) : original.halfWidth;

@@ -6,4 +6,4 @@
  * this door reaches free of ml-matrix and @stdlib.
  */
 export { publishedEstimate, intervalHalfWidths, type PublishedEstimate, type PublishedModel } from './stats/publishedEstimate.ts';
-export { formatNumber, formatToPlace, lastDigitPlace } from './format/formatNumber.ts';
+export { formatInterval, formatNumber, formatToPlace, lastDigitPlace } from './format/formatNumber.ts';

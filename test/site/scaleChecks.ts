@@ -91,6 +91,16 @@ export function describeScales(context: () => ScaleContext): void {
         expect(after.map((row) => row[1])).toEqual(kelvin.printedCoefficients);
         expect(after.map((row) => Number(row[2]))).toEqual(kelvin.significantDigits);
         expect(after).not.toEqual(before);
+        // Each end of an interval is printed to the decimal place of the printed coefficient of this scale, no finer
+        // (issue 12; the same rule as the native table, test/site/numberChecks.ts).
+        after.forEach((row, k) => {
+          if (row[4] === '—' || row[4] === undefined) return;
+          const place = Math.floor(Math.log10(Math.abs(Number(row[1])))) - kelvin.significantDigits[k]! + 1;
+          for (const end of row[4].split(' to ')) {
+            const [mantissa, exponent] = end.split(/e/i);
+            expect(Number(exponent ?? 0) - (mantissa!.split('.')[1]?.length ?? 0), `a${k}: ${row[4]}`).toBeGreaterThanOrEqual(place);
+          }
+        });
         const plainAfter = await page.locator('.equation-plain-row[data-form="printed"] code').textContent();
         expect(plainAfter).not.toBe(plainBefore);
         expect(plainAfter).toBe(kelvin.equation);
