@@ -7,7 +7,7 @@ import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { cautionsFor, type PolynomialFit } from '../core/index.ts';
 import type { LoadedCorrelation } from '../load/index.ts';
-import { buildChartData, escapeXml, renderFitSvg } from '../render/index.ts';
+import { buildChartData, renderFitSvg } from '../render/index.ts';
 import { CliError } from './cliError.ts';
 
 function label(name: string, symbol: string, unit: string): string {
@@ -27,11 +27,10 @@ export function fitPlotSvg(correlation: LoadedCorrelation, fit: PolynomialFit): 
     residualLabel: `residual y − ŷ${property.unit && property.unit !== '1' ? ` (${property.unit})` : ''}`,
     range: correlation.range,
   });
-  const svg = renderFitSvg(data, { title: `${correlation.meta.title}: data, fitted curve and bands; residuals below` });
   // The cautions travel with the file as its description (the picture itself has no room for them).
   const unit = variable.unit === '1' ? '' : variable.unit;
   const cautions = cautionsFor(correlation.range, unit, variable.name).join(' ');
-  return svg.replace('</title>', `</title><desc>${escapeXml(`Cautions: ${cautions}`)}</desc>`);
+  return renderFitSvg(data, { title: `${correlation.meta.title}: data, fitted curve and bands; residuals below`, description: `Cautions: ${cautions}` });
 }
 
 /** Write the plot to `file` (must end in .svg and must not be one of the inputs). */

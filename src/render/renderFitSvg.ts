@@ -23,6 +23,8 @@ function dots(points: readonly (readonly [number, number])[], color: string, dia
 export interface RenderFitSvgOptions {
   /** Text of the SVG's <title>; defaults to a description of what is drawn. */
   readonly title?: string;
+  /** Text of the SVG's <desc> (the cautions, the handbook), which travels with the file; none by default. */
+  readonly description?: string;
 }
 
 /**
@@ -59,7 +61,7 @@ export function renderFitSvg(data: FitChartData, options: RenderFitSvgOptions = 
   const height = mainHeight + residualHeight;
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="${width}" height="${height}" role="img" aria-labelledby="fit-svg-title" font-family="system-ui, sans-serif" color="#1d232a">` +
-    `<title id="fit-svg-title">${escapeXml(title)}</title><rect width="${width}" height="${height}" fill="#fff"/>` +
+    `<title id="fit-svg-title">${escapeXml(title)}</title>${options.description ? `<desc>${escapeXml(options.description)}</desc>` : ''}<rect width="${width}" height="${height}" fill="#fff"/>` +
     `<g class="fit-main">${main}</g><g class="fit-residuals" transform="translate(0,${mainHeight})">${lower}</g></svg>`
   );
 }

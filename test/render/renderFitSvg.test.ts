@@ -77,6 +77,12 @@ describe('renderFitSvg', () => {
     expect(dots[0]![1]!).toBeLessThan(mainHeight - margin.bottom + 0.01);
   });
 
+  it('renderFitSvg(data, { description }) writes the description, escaped, right after the title; none without it', () => {
+    const svg = renderFitSvg(lineChart(), { title: 'T', description: 'Cautions: 1 < x & x ≤ 2' });
+    expect(svg).toContain('<title id="fit-svg-title">T</title><desc>Cautions: 1 &lt; x &amp; x ≤ 2</desc>');
+    expect(renderFitSvg(lineChart())).not.toContain('<desc>');
+  });
+
   it('renderFitSvg(data) draws the point left out as an open ring with its reason, escaped', () => {
     const svg = renderFitSvg(lineChart());
     expect(svg.match(/<circle /g)).toHaveLength(1);

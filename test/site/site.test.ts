@@ -365,7 +365,7 @@ describe('handbook.json', () => {
     expect(json.cautions).toEqual(CAUTIONS);
   });
 
-  it("the handbook's own settings reach every export: handbook.json, coefficients.json and .csv, data.csv and each code snippet's header", async () => {
+  it("the handbook's own settings reach every export: handbook.json, coefficients.json and .csv, data.csv, plot.svg and each code snippet's header", async () => {
     // SETTINGS is the handbook.yaml this test wrote into the copied content; every expected text is built from it.
     const site = `${SETTINGS.url}${BASE}`;
     const json = JSON.parse(await readFile(path.join(outDir, 'handbook.json'), 'utf8'));
@@ -382,6 +382,13 @@ describe('handbook.json', () => {
         expect(lines, `${correlation.slug}/${file}`).toContain(`# ${line}`);
         expect(lines, `${correlation.slug}/${file}`).toContain(`# Handbook notice: ${SETTINGS.notice}`);
       }
+      // The plot download: the cautions and the handbook in its description.
+      const svg = await readFile(path.join(folder, 'plot.svg'), 'utf8');
+      const description = svg.match(/<desc>([^<]*)<\/desc>/)?.[1] ?? '';
+      expect(description, `${correlation.slug}/plot.svg`).toContain(line);
+      expect(description, `${correlation.slug}/plot.svg`).toContain(`Handbook notice: ${SETTINGS.notice}`);
+      const unit = correlation.meta.variable.unit === '1' ? '' : correlation.meta.variable.unit;
+      for (const caution of cautionsFor(correlation.range, unit, correlation.meta.variable.name)) expect(description, `${correlation.slug}/plot.svg`).toContain(caution);
       for (const kind of ['python', 'javascript', 'typescript', 'c', 'spreadsheet']) {
         const download = entry.downloads[kind] as string;
         const text = await readFile(path.join(outDir, ...download.slice(BASE.length).split('/')), 'utf8');
