@@ -24,7 +24,7 @@ export function fitPlotSvg(correlation: LoadedCorrelation, fit: PolynomialFit): 
     excluded: correlation.excluded,
     xLabel: label(variable.name, variable.symbol, variable.unit),
     yLabel: label(property.name, property.symbol, property.unit),
-    residualLabel: `residual y − ŷ${property.unit && property.unit !== '1' ? ` (${property.unit})` : ''}`,
+    residualLabel: `y − ŷ${property.unit && property.unit !== '1' ? ` (${property.unit})` : ''}`,
     range: correlation.range,
   });
   // The cautions travel with the file as its description (the picture itself has no room for them).

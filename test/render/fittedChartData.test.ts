@@ -13,7 +13,7 @@ const p = T.map((t, i) => Math.exp(14 - 2400 / t - 1.4e5 / (t * t)) * (1 + 0.004
 const fit = fitPolynomial({ x: T, y: p }, { order: 2, transformX: 'reciprocal', transformY: 'log' });
 const measured: FitChartData = {
   ...buildChartData({ fit, points: T.map((x, i) => ({ row: i + 1, x, y: p[i]! })), xLabel: 'temperature, T (K)', yLabel: 'vapour pressure, p (kPa)' }),
-  fitted: { x: 'reciprocal', y: 'log', xLabel: 'reciprocal temperature, 1/T (1/K)', yLabel: 'ln of vapour pressure, ln(p / kPa)', residualLabel: 'residual ln y − ln ŷ' },
+  fitted: { x: 'reciprocal', y: 'log', xLabel: 'reciprocal temperature, 1/T (1/K)', yLabel: 'ln of vapour pressure, ln(p / kPa)', residualLabel: 'ln y − ln ŷ' },
 };
 const polynomial = (u: number) => fit.coefficients.reduce((sum, a, k) => sum + a * u ** k, 0);
 
@@ -37,7 +37,7 @@ describe('fittedChartData', () => {
     });
     expect(fitted.xLabel).toBe('reciprocal temperature, 1/T (1/K)');
     expect(fitted.yLabel).toBe('ln of vapour pressure, ln(p / kPa)');
-    expect(fitted.residualLabel).toBe('residual ln y − ln ŷ');
+    expect(fitted.residualLabel).toBe('ln y − ln ŷ');
     expect(fitted.range).toEqual({ min: 1 / 340, max: 1 / 220 });
   });
 

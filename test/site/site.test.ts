@@ -497,6 +497,26 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
       expect(paths.filter((d) => d.length > 100).length).toBe(3); // prediction band, confidence band, curve
       expect(await browserPage.locator('[data-fit-chart] img.chart-static').isVisible()).toBe(false);
 
+      // Every text of both charts (tick labels, axis titles) is drawn inside its chart, also on the page whose units
+      // make the longest axis titles (a rotated residual title once ran off the top of the residual panel).
+      const longest = [...correlations].sort((a, b) => b.meta.property.unit.length - a.meta.property.unit.length)[0]!;
+      for (const slug of [target.slug, longest.slug]) {
+        if (slug !== target.slug) await browserPage.goto(`${server.url}${BASE}correlations/${slug}/`, { waitUntil: 'networkidle' });
+        await svgs.first().waitFor({ timeout: 10_000 });
+        const outside = await svgs.evaluateAll((nodes) =>
+          nodes.flatMap((svg) => {
+            const frame = svg.getBoundingClientRect();
+            return [...svg.querySelectorAll('text')]
+              .filter((text) => (text.textContent ?? '').trim() !== '')
+              .map((text) => ({ text: text.textContent, box: text.getBoundingClientRect() }))
+              .filter(({ box }) => box.top < frame.top - 0.5 || box.bottom > frame.bottom + 0.5 || box.left < frame.left - 0.5 || box.right > frame.right + 0.5)
+              .map(({ text }) => text);
+          }),
+        );
+        expect(outside, slug).toEqual([]);
+      }
+      if (longest.slug !== target.slug) await browserPage.goto(`${server.url}${BASE}correlations/${target.slug}/`, { waitUntil: 'networkidle' });
+
       const firstPoint = svgs.nth(0).locator('g circle').first();
       const box = (await firstPoint.boundingBox())!;
       await browserPage.mouse.move(box.x + box.width / 2, box.y + box.height / 2);

@@ -43,7 +43,7 @@ export function fittedCoordinates(entry: CorrelationEntry, fit: PolynomialFit, m
     y: fit.transformY,
     xLabel,
     yLabel: logY ? `ln of ${property.name}, ${lnText(y, property.unit)}` : measured.yLabel,
-    residualLabel: logY ? 'residual ln y − ln ŷ' : measured.residualLabel,
+    residualLabel: logY ? 'ln y − ln ŷ' : measured.residualLabel,
   };
 }
 
@@ -53,7 +53,7 @@ export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 1
   const labels = {
     xLabel: `${variable.name}, ${labelSymbol(variable.symbol)}${unitSuffix(variable.unit) ? ` (${variable.unit})` : ''}`,
     yLabel: `${property.name}, ${labelSymbol(property.symbol)}${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
-    residualLabel: `residual y − ŷ${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
+    residualLabel: `y − ŷ${unitSuffix(property.unit) ? ` (${property.unit})` : ''}`,
   };
   const data = buildChartData({ fit, points: usedPoints(entry), excluded: entry.excluded, ...labels, range: entry.range, count });
   const fitted = fittedCoordinates(entry, fit, labels);
