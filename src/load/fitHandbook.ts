@@ -5,7 +5,7 @@
  */
 import path from 'node:path';
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
-import { fitCacheKey, pruneFitCache, readCachedFit, writeCachedFit, type FitCache } from './fitCache.ts';
+import { fitCacheKey, pruneFitCache, readCachedSummary, writeCachedFit, type FitCache } from './fitCache.ts';
 import { cacheRecord } from './cacheRecord.ts';
 import { createFitPool, poolSize } from './fitPool.ts';
 import { readHandbook } from './readHandbook.ts';
@@ -49,8 +49,9 @@ export interface FitHandbookOptions {
 /** One folder's fit from the cache, or undefined when the cache does not hold its inputs. */
 function fromCache(correlation: LoadedCorrelation, cache: FitCache): { key: string; fitted?: DatasetFit } {
   const key = fitCacheKey(correlation, cache.version);
-  const hit = readCachedFit(cache.directory, key);
-  return { key, ...(hit === undefined ? {} : { fitted: { fit: hit.fit, selection: hit.selection, diagnostics: hit.diagnostics, cacheKey: key } }) };
+  // Only the small summary: the per-point statistics and the order table are read when something asks for them.
+  const hit = readCachedSummary(cache.directory, key);
+  return { key, ...(hit === undefined ? {} : { fitted: { ...hit, cacheKey: key } }) };
 }
 
 /** Fit in this thread, writing the cache record when there is a cache. */

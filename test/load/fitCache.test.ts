@@ -45,11 +45,45 @@ describe('fit cache', () => {
     const second = await fitHandbook(content, { fitCache });
     expect(first.cachedFits).toBe(0);
     expect(second.cachedFits).toBe(2);
-    expect(await readdir(fitCache.directory)).toHaveLength(2);
+    // A record and its summary per dataset.
+    expect((await readdir(fitCache.directory)).sort()).toEqual(second.datasets.flatMap((item) => [`${item.fitted!.cacheKey}.json`, `${item.fitted!.cacheKey}.summary.json`]).sort());
     expect(fitsOf(first)).toEqual(fitsOf(fresh));
     expect(fitsOf(second)).toEqual(fitsOf(fresh));
     expect(second.diagnostics).toEqual(fresh.diagnostics);
     expect(second.datasets.map((item) => item.review)).toEqual(fresh.datasets.map((item) => item.review));
+  });
+
+  it('a cache hit reads only the summary: the per-point statistics and the order table come from the full record when first asked for', async () => {
+    const content = path.join(root, 'content');
+    const fitCache = { directory: path.join(root, 'cache-summary'), version: 'test-1' };
+    const fresh = await fitHandbook(content);
+    await fitHandbook(content, { fitCache });
+    const hit = await fitHandbook(content, { fitCache });
+    const key = hit.datasets[0]!.fitted!.cacheKey!;
+    const summaryText = await readFile(path.join(fitCache.directory, `${key}.summary.json`), 'utf8');
+    const fullText = await readFile(path.join(fitCache.directory, `${key}.json`), 'utf8');
+    // The summary holds neither large array, and is a small part of the record.
+    const summary = fromCacheJson(summaryText) as { fit: Record<string, unknown>; selection: Record<string, unknown> };
+    expect('points' in summary.fit).toBe(false);
+    expect('orders' in summary.selection).toBe(false);
+    expect(summaryText.length).toBeLessThan(fullText.length / 2);
+    // With the full record damaged, a hit still gives the fingerprint's inputs (order, printed coefficients)…
+    await writeFile(path.join(fitCache.directory, `${key}.json`), '{ damaged');
+    try {
+      const again = await fitHandbook(content, { fitCache });
+      const fitted = again.datasets[0]!.fitted!;
+      expect(again.cachedFits).toBe(2);
+      expect(fitted.fit!.order).toBe(fresh.datasets[0]!.fitted!.fit!.order);
+      expect(fitted.fit!.printedCoefficients).toEqual(fresh.datasets[0]!.fitted!.fit!.printedCoefficients);
+      expect(again.datasets[0]!.review).toEqual(fresh.datasets[0]!.review);
+      // …and only asking for the per-point statistics reads the record (here: fails, naming it).
+      expect(() => fitted.fit!.points).toThrow(/requires the cached fit .* it is missing/);
+    } finally {
+      await writeFile(path.join(fitCache.directory, `${key}.json`), fullText);
+    }
+    // With the record back, the lazily read arrays equal a fresh fit's.
+    const restored = await fitHandbook(content, { fitCache });
+    expect(fitsOf(restored)).toEqual(fitsOf(fresh));
   });
 
   it('a cache record carries every data row and the previews of the other orders, the same as drawn from full fits of those orders', async () => {

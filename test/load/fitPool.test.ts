@@ -57,10 +57,11 @@ describe('fitHandbook in worker threads', () => {
     try {
       const second = await fitHandbook(content, { fitCache, prune: true });
       const after = new Set(await readdir(fitCache.directory));
-      const keys = (handbook: typeof first) => new Set(handbook.datasets.flatMap((item) => (item.fitted?.cacheKey ? [`${item.fitted.cacheKey}.json`] : [])));
+      const keys = (handbook: typeof first) => new Set(handbook.datasets.flatMap((item) => (item.fitted?.cacheKey ? [`${item.fitted.cacheKey}.json`, `${item.fitted.cacheKey}.summary.json`] : [])));
       expect(after).toEqual(keys(second));
       expect(after.size).toBe(before.size);
-      expect([...before].filter((name) => !after.has(name))).toHaveLength(1);
+      // The changed dataset's record and its summary.
+      expect([...before].filter((name) => !after.has(name))).toHaveLength(2);
     } finally {
       await writeFile(csvPath, csv);
     }
