@@ -16,8 +16,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
 import type { LoadedCorrelation } from '../../src/load/index.ts';
 import { serveDirectory } from './staticServer.ts';
+import { CHROMIUM, launchChromium } from '../helpers/chromium.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
 
 export interface ChartContext {
   readonly siteRoot: string;
@@ -79,13 +79,8 @@ export function describeChart(context: () => ChartContext): void {
   let server: { url: string; close: () => Promise<void> } | undefined;
 
   beforeAll(async () => {
-    const { chromium } = await import('playwright-core');
     server = await serveDirectory(context().siteRoot);
-    browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    });
+    browser = await launchChromium();
   }, 60_000);
 
   afterAll(async () => {

@@ -19,8 +19,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import type { LoadedCorrelation } from '../../src/load/index.ts';
 import { serveDirectory } from './staticServer.ts';
+import { CHROMIUM, launchChromium } from '../helpers/chromium.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
 
 export interface EvaluatorContext {
   readonly siteRoot: string;
@@ -82,12 +82,7 @@ export function describeEvaluator(context: () => EvaluatorContext): void {
     beforeAll(async () => {
       given = context();
       server = await serveDirectory(given.siteRoot);
-      const { chromium } = await import('playwright-core');
-      browser = await chromium.launch({
-        executablePath: CHROMIUM,
-        headless: true,
-        args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-      });
+      browser = await launchChromium();
     }, 60_000);
 
     afterAll(async () => {

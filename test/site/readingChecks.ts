@@ -14,8 +14,8 @@ import type { Browser, Page } from 'playwright-core';
 import type { LoadedCorrelation } from '../../src/load/index.ts';
 import { propertyKey } from '../../src/components/lib/propertyKey.ts';
 import { serveDirectory } from './staticServer.ts';
+import { CHROMIUM, launchChromium } from '../helpers/chromium.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
 const require = createRequire(import.meta.url);
 /** Screenshots for a person to look at; kept in the OS temp folder, never in the repository. */
 export const SCREENSHOTS = path.join(process.env['TMPDIR'] ?? '/tmp', 'correlary-screenshots');
@@ -77,12 +77,7 @@ describe(`reading the handbook in Chromium (${CHROMIUM})`, () => {
     BASE = given.base;
     correlations = given.correlations;
     server = await serveDirectory(given.siteRoot);
-    const { chromium } = await import('playwright-core');
-    browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    });
+    browser = await launchChromium();
     await mkdir(SCREENSHOTS, { recursive: true });
   }, 60_000);
 

@@ -15,8 +15,8 @@ import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { serveDirectory } from './staticServer.ts';
+import { CHROMIUM, launchChromium } from '../helpers/chromium.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
 
 export interface ScaleContext {
   readonly siteRoot: string;
@@ -57,13 +57,8 @@ export function describeScales(context: () => ScaleContext): void {
       const target = json.correlations.find((item) => item.temperatureScales?.native === '°C' && item.temperatureScales.scales.every((form) => form.shown))!;
       expect(target, 'a correlation fitted in °C').toBeDefined();
       const kelvin = target.temperatureScales!.scales.find((form) => form.scale === 'K')!;
-      const { chromium } = await import('playwright-core');
       const server = await serveDirectory(siteRoot);
-      const browser = await chromium.launch({
-        executablePath: CHROMIUM,
-        headless: true,
-        args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-      });
+      const browser = await launchChromium();
       try {
         const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
         const errors: string[] = [];

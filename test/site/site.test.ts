@@ -30,8 +30,8 @@ import { describeEvaluator } from './evaluatorChecks.ts';
 import { describeScales } from './scaleChecks.ts';
 import { describeReading } from './readingChecks.ts';
 import { serveDirectory } from './staticServer.ts';
+import { CHROMIUM, launchChromium } from '../helpers/chromium.ts';
 
-const CHROMIUM = '/usr/bin/chromium';
 
 /** The settings file written into the copied content: every field set, none of them the default. */
 const SETTINGS = {
@@ -469,14 +469,8 @@ describe('the browser only draws', () => {
 
 describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; install it with apt-get install -y chromium)`, () => {
   it('draws points, curve, bands and residuals from the embedded data, and shows a tooltip on hover', async () => {
-    const { chromium } = await import('playwright-core');
     const server = await serveDirectory(siteRoot);
-    const browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      headless: true,
-      // Without the background-networking flags Chromium keeps trying hosts this closed network refuses.
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    });
+    const browser = await launchChromium();
     try {
       const target = correlations.find((correlation) => correlation.excluded.length > 0) ?? correlations[0]!;
       const browserPage = await browser.newPage({ viewport: { width: 1280, height: 900 } });
@@ -531,13 +525,8 @@ describe.skipIf(!existsSync(CHROMIUM))(`the chart in Chromium (${CHROMIUM}; inst
   });
 
   it('copies the equation as plain text: the copy buttons, and a selection of the typeset equation', async () => {
-    const { chromium } = await import('playwright-core');
     const server = await serveDirectory(siteRoot);
-    const browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
-    });
+    const browser = await launchChromium();
     try {
       // An untransformed fit with an intercept, so the expected text is simply y = a0 + a1*x + a2*x^2 + ...
       const target = correlations.find((correlation) => correlation.meta.fit.transform.x === 'identity' && correlation.meta.fit.transform.y === 'identity' && correlation.meta.fit.intercept)!;
