@@ -11,8 +11,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { publishedEstimate, type PublishedModel } from '../../src/core/index.ts';
-import { correlationRecord, javascriptSnippet, snippetIdentifier, snippetModel, snippetSource, type CorrelationRecord } from '../../src/export/index.ts';
-import { fitHandbook } from '../../src/load/index.ts';
+import { javascriptSnippet, snippetIdentifier, snippetModel, type CorrelationRecord } from '../../src/export/index.ts';
+import { publishedCorrelations, relativeError } from '../helpers/publishedCorrelations.ts';
 import { publishedModelOf, snippetConstants, type EvaluatorSubject } from '../../src/client/evaluatorModel.ts';
 import { evaluatorResult } from '../../src/client/evaluatorResult.ts';
 
@@ -27,18 +27,9 @@ interface Case {
 const directory = mkdtempSync(path.join(tmpdir(), 'correlary-evaluator-'));
 const cases: Case[] = [];
 
-function relative(value: number, reference: number): number {
-  return reference === 0 ? Math.abs(value) : Math.abs(value - reference) / Math.abs(reference);
-}
 
 beforeAll(async () => {
-  const handbook = await fitHandbook('content');
-  for (const { dataset, fitted } of handbook.datasets) {
-    const loaded = dataset.correlation;
-    if (loaded === undefined || fitted?.fit === undefined) continue;
-    const fit = fitted.fit;
-    const record = correlationRecord({ slug: loaded.slug, meta: loaded.meta, range: loaded.range, excluded: loaded.excluded, fit, selection: fitted.selection ?? null });
-    const source = snippetSource(fit, record);
+  for (const { fit, record, source } of await publishedCorrelations('content')) {
     const snippet = javascriptSnippet(source);
     const name = snippetIdentifier(record.slug);
     writeFileSync(path.join(directory, `${name}.mjs`), snippet);
@@ -94,11 +85,11 @@ console.log(JSON.stringify(out));`;
       const result = results[item.name]!;
       item.xs.forEach((x, i) => {
         const estimate = publishedEstimate(item.model, x);
-        const errors = [relative(estimate.y, result.y[i]!)];
+        const errors = [relativeError(estimate.y, result.y[i]!)];
         // JSON writes NaN as null (a fit without residual degrees of freedom has no interval).
         const [low, high] = result.pi[i]!;
         if (low === null) expect(estimate.predictionLow, `${item.name} at ${x}`).toBeNaN();
-        else errors.push(relative(estimate.predictionLow, low!), relative(estimate.predictionHigh, high!));
+        else errors.push(relativeError(estimate.predictionLow, low!), relativeError(estimate.predictionHigh, high!));
         worst = Math.max(worst, ...errors);
         expect(Math.max(...errors), `${item.name} at ${x}`).toBeLessThanOrEqual(1e-13);
       });

@@ -15,17 +15,15 @@ import { HyperFormula } from 'hyperformula';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { applyMap, bands, fromDouble, scaleConversion, toNumber, type PolynomialFit } from '../../src/core/index.ts';
 import {
-  correlationRecord,
   cSnippet,
   javascriptSnippet,
   pythonSnippet,
   snippetIdentifier,
-  snippetSource,
   spreadsheetFormula,
   SPREADSHEET_X_NAME,
   type CorrelationRecord,
 } from '../../src/export/index.ts';
-import { fitHandbook } from '../../src/load/index.ts';
+import { publishedCorrelations, relativeError } from '../helpers/publishedCorrelations.ts';
 
 /** One scale of a temperature correlation: its check values (exact evaluation of the re-expressed certified
  * coefficients, independent of the snippets' mapped-form evaluation) and two x just outside its range. */
@@ -51,25 +49,16 @@ const cases: Case[] = [];
 /** language → slug → worst relative error at the check values. */
 const worst: Record<string, Record<string, number>> = {};
 
-function relative(value: number, reference: number): number {
-  return reference === 0 ? Math.abs(value) : Math.abs(value - reference) / Math.abs(reference);
-}
 
 function record(language: string, item: Case, values: readonly number[]): number {
-  const errors = item.record.checkValues.map((check, i) => relative(values[i]!, check.y!));
+  const errors = item.record.checkValues.map((check, i) => relativeError(values[i]!, check.y!));
   const max = Math.max(...errors);
   (worst[language] ??= {})[item.record.slug] = max;
   return max;
 }
 
 beforeAll(async () => {
-  const handbook = await fitHandbook('content');
-  for (const { dataset, fitted } of handbook.datasets) {
-    const loaded = dataset.correlation;
-    if (loaded === undefined || fitted?.fit === undefined) continue;
-    const fit = fitted.fit;
-    const rec = correlationRecord({ slug: loaded.slug, meta: loaded.meta, range: loaded.range, excluded: loaded.excluded, fit, selection: fitted.selection ?? null });
-    const source = snippetSource(fit, rec);
+  for (const { fit, record: rec, source } of await publishedCorrelations('content')) {
     const name = snippetIdentifier(rec.slug);
     writeFileSync(path.join(directory, `${name}.py`), pythonSnippet(source));
     writeFileSync(path.join(directory, `${name}.mjs`), javascriptSnippet(source));
@@ -93,7 +82,7 @@ beforeAll(async () => {
 const worstInScale: Record<string, Record<string, number>> = {};
 
 function recordScale(language: string, item: Case, scale: ScaleCase, values: readonly number[]): number {
-  const max = Math.max(...scale.ys.map((y, i) => relative(values[i]!, y)));
+  const max = Math.max(...scale.ys.map((y, i) => relativeError(values[i]!, y)));
   (worstInScale[language] ??= {})[`${item.record.slug} ${scale.scale}`] = max;
   return max;
 }
@@ -166,8 +155,8 @@ print(json.dumps(out))
       expect(result.refused, item.name).toEqual([true, true]);
       const expected = bands(item.fit, item.xs);
       result.pi.forEach(([low, high], i) => {
-        expect(relative(Number(low), expected[i]!.predictionLow), `${item.name} PI low`).toBeLessThan(1e-9);
-        expect(relative(Number(high), expected[i]!.predictionHigh), `${item.name} PI high`).toBeLessThan(1e-9);
+        expect(relativeError(Number(low), expected[i]!.predictionLow), `${item.name} PI low`).toBeLessThan(1e-9);
+        expect(relativeError(Number(high), expected[i]!.predictionHigh), `${item.name} PI high`).toBeLessThan(1e-9);
       });
     }
   });
@@ -188,8 +177,8 @@ console.log(JSON.stringify(out));`;
       expect(result.refused, item.name).toEqual([true, true]);
       const expected = bands(item.fit, item.xs);
       result.pi.forEach(([low, high], i) => {
-        expect(relative(low!, expected[i]!.predictionLow), `${item.name} PI low`).toBeLessThan(1e-9);
-        expect(relative(high!, expected[i]!.predictionHigh), `${item.name} PI high`).toBeLessThan(1e-9);
+        expect(relativeError(low!, expected[i]!.predictionLow), `${item.name} PI low`).toBeLessThan(1e-9);
+        expect(relativeError(high!, expected[i]!.predictionHigh), `${item.name} PI high`).toBeLessThan(1e-9);
       });
     }
   });
@@ -315,8 +304,8 @@ console.log(JSON.stringify(out));`;
         const nativeXs = scale.xs.map((x) => toNumber(applyMap(scaleConversion(scale.scale, native), fromDouble(x))));
         const expected = bands(item.fit, nativeXs.map((x) => Math.min(item.fit.range.max, Math.max(item.fit.range.min, x))));
         expected.forEach((band, i) => {
-          expect(relative(Number(py.pi[i]![0]), band.predictionLow), `${key} Python PI`).toBeLessThan(1e-9);
-          expect(relative(js.pi[i]![1]!, band.predictionHigh), `${key} JavaScript PI`).toBeLessThan(1e-9);
+          expect(relativeError(Number(py.pi[i]![0]), band.predictionLow), `${key} Python PI`).toBeLessThan(1e-9);
+          expect(relativeError(js.pi[i]![1]!, band.predictionHigh), `${key} JavaScript PI`).toBeLessThan(1e-9);
         });
         const mine = cLines.filter((parts) => parts[0] === name && parts[1] === constant[scale.scale]);
         expect(recordScale('C', item, scale, mine.filter((parts) => parts[2] !== 'refused').map((parts) => Number(parts[2]))), key).toBeLessThanOrEqual(1e-12);

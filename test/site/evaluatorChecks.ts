@@ -20,6 +20,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import type { LoadedCorrelation } from '../../src/load/index.ts';
 import { serveDirectory } from './staticServer.ts';
 import { CHROMIUM, launchChromium } from '../helpers/chromium.ts';
+import { relativeError } from '../helpers/publishedCorrelations.ts';
 
 
 export interface EvaluatorContext {
@@ -66,10 +67,6 @@ for x in json.loads(sys.argv[2]):
 print(json.dumps(out))
 `;
   return JSON.parse(execFileSync('python3', ['-c', script, snippetFile, JSON.stringify(xs)], { encoding: 'utf8' })) as PythonAnswer[];
-}
-
-function relative(value: number, reference: number): number {
-  return reference === 0 ? Math.abs(value) : Math.abs(value - reference) / Math.abs(reference);
 }
 
 /** Register the evaluator and copy-button checks; `context` is called once the site is built. */
@@ -146,11 +143,11 @@ export function describeEvaluator(context: () => EvaluatorContext): void {
           const answer = await shown(page);
           const reference = expected[i]!;
           const errorsAtX = [
-            relative(answer.y, reference.y),
-            ...answer.ci.map((value, k) => relative(value, reference.ci[k]!)),
-            ...answer.pi.map((value, k) => relative(value, reference.pi[k]!)),
-            relative(answer.y, reference.snippet!.y),
-            ...answer.pi.map((value, k) => relative(value, reference.snippet!.pi[k]!)),
+            relativeError(answer.y, reference.y),
+            ...answer.ci.map((value, k) => relativeError(value, reference.ci[k]!)),
+            ...answer.pi.map((value, k) => relativeError(value, reference.pi[k]!)),
+            relativeError(answer.y, reference.snippet!.y),
+            ...answer.pi.map((value, k) => relativeError(value, reference.snippet!.pi[k]!)),
           ];
           worst = Math.max(worst, ...errorsAtX);
           expect(Math.max(...errorsAtX), `${target.slug} at ${x}: ${JSON.stringify({ answer, reference })}`).toBeLessThanOrEqual(1e-12);
@@ -189,7 +186,7 @@ export function describeEvaluator(context: () => EvaluatorContext): void {
       const answer = await shown(page);
       expect(answer.x).toBe(x);
       const [reference] = pythonAnswers(path.join(given.outDir, 'correlations', target.slug, `${target.slug.replace(/-/g, '_')}.py`), target.meta.fit.transform.x, target.meta.fit.transform.y, [x]);
-      expect(relative(answer.y, reference!.y), `${target.slug} at ${x}`).toBeLessThanOrEqual(1e-12);
+      expect(relativeError(answer.y, reference!.y), `${target.slug} at ${x}`).toBeLessThanOrEqual(1e-12);
       expect(reference!.snippet).toBeNull();
       // The warning and the value are in the same result region, both visible, the warning first.
       const [warningBox, valueBox] = [await warning.boundingBox(), await page.locator('#evaluator-result .evaluator-values').boundingBox()];
