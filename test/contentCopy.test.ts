@@ -19,7 +19,7 @@ const projectRoot = fileURLToPath(new URL('..', import.meta.url));
 /** Folder name of the added correlation (not a demo name, so the demo byte-compare leaves it alone). */
 const ADDED = 'team-added-liquid';
 /** How a test reads the project's own content/ folder (not a fixture or a copy). */
-const READS_CONTENT = /(?:fitHandbook|readHandbook)\(\s*'content'\s*\)|path\.join\(\s*'content'\s*,|join\(\s*projectRoot\s*,\s*'content'\s*\)/;
+const READS_CONTENT = /(?:fitHandbook|readHandbook|publishedCorrelations)\(\s*'content'\s*\)|path\.join\(\s*'content'\s*,|join\(\s*projectRoot\s*,\s*'content'\s*\)/;
 const SKIPPED = new Set(['node_modules', '.git', 'dist', '.astro', 'lib', 'bench-profiles']);
 
 let copy = '';
