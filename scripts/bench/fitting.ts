@@ -1,0 +1,137 @@
+/**
+ * bench:fitting — the CPU time of fitting one dataset as a fitting worker does it (src/load/fitWorker.ts): fitDataset,
+ * then the cache record (the previews of the other orders, src/load/cacheRecord.ts), then writing it
+ * (writeCachedFit), for every dataset of the seeded synthetic handbook of bench:build, in this one thread, without
+ * Astro. Prints CPU time (process.cpuUsage) and wall time per phase and per pass; nothing here asserts a time.
+ *
+ * With `--baseline DIR` (another checkout's root, e.g. `git archive main src package.json | tar -x -C DIR` with
+ * node_modules linked) the same datasets are also fitted by that checkout's code, passes alternating, so before and
+ * after are measured in the same run under the same load; the cache records of both are compared byte for byte
+ * (their JSON text) and the number of identical records is printed.
+ *
+ * Run: npm run bench:fitting -- [--count 1000] [--seed 1] [--passes 2] [--baseline DIR] [--only current|baseline]
+ * A V8 profile: node --cpu-prof --cpu-prof-dir=DIR --import tsx scripts/bench/fitting.ts --count 1000 --passes 1
+ */
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { writeSyntheticHandbook } from './build/syntheticHandbook.ts';
+
+const repository = fileURLToPath(new URL('../..', import.meta.url));
+const argv = process.argv.slice(2);
+function option(name: string, fallback: string): string {
+  const at = argv.findIndex((arg) => arg === `--${name}` || arg.startsWith(`--${name}=`));
+  if (at < 0) return fallback;
+  const arg = argv[at]!;
+  return arg.includes('=') ? arg.slice(arg.indexOf('=') + 1) : (argv[at + 1] ?? fallback);
+}
+const count = Number(option('count', '1000'));
+const seed = Number(option('seed', '1'));
+const passes = Number(option('passes', '2'));
+const baselineRoot = option('baseline', '');
+const only = option('only', '');
+if (!Number.isInteger(count) || count < 1) throw new Error(`bench:fitting requires --count to be a positive whole number; got ${option('count', '')}`);
+if (!Number.isInteger(passes) || passes < 1) throw new Error(`bench:fitting requires --passes to be a positive whole number; got ${option('passes', '')}`);
+
+type Correlation = unknown;
+interface Code {
+  readonly name: string;
+  readonly fitDataset: (correlation: Correlation) => unknown;
+  readonly cacheRecord: (correlation: Correlation, fitted: unknown) => unknown;
+  readonly writeCachedFit: (directory: string, key: string, record: unknown) => void;
+  readonly toCacheJson: (value: unknown) => string;
+}
+
+async function load(name: string, root: string): Promise<Code> {
+  const at = (file: string) => pathToFileURL(path.join(root, 'src', 'load', file)).href;
+  const [{ fitDataset }, { cacheRecord }, { writeCachedFit, toCacheJson }] = await Promise.all([import(at('fitDataset.ts')), import(at('cacheRecord.ts')), import(at('fitCache.ts'))]);
+  return { name, fitDataset, cacheRecord, writeCachedFit, toCacheJson };
+}
+
+interface Figures {
+  fit: number;
+  previews: number;
+  write: number;
+  cpu: number;
+  wall: number;
+}
+
+const cpuMs = () => {
+  const usage = process.cpuUsage();
+  return (usage.user + usage.system) / 1000;
+};
+
+/** One pass over every dataset: CPU ms per phase, and CPU and wall ms of the pass. */
+function pass(code: Code, correlations: readonly Correlation[], directory: string, records?: string[]): Figures {
+  const figures: Figures = { fit: 0, previews: 0, write: 0, cpu: 0, wall: 0 };
+  const wallStart = performance.now();
+  const cpuStart = cpuMs();
+  correlations.forEach((correlation, i) => {
+    const a = cpuMs();
+    const fitted = code.fitDataset(correlation);
+    const b = cpuMs();
+    const record = code.cacheRecord(correlation, fitted);
+    const c = cpuMs();
+    code.writeCachedFit(directory, `${String(i).padStart(64, '0')}`, record);
+    const d = cpuMs();
+    figures.fit += b - a;
+    figures.previews += c - b;
+    figures.write += d - c;
+    if (records) records[i] = code.toCacheJson(record);
+  });
+  figures.cpu = cpuMs() - cpuStart;
+  figures.wall = performance.now() - wallStart;
+  return figures;
+}
+
+const seconds = (ms: number) => (ms / 1000).toFixed(2);
+
+async function main(): Promise<void> {
+  const work = await mkdtemp(path.join(tmpdir(), 'correlary-bench-fitting-'));
+  try {
+    const content = path.join(work, 'content');
+    await writeSyntheticHandbook(content, { count, seed });
+    const { readHandbook } = (await import(pathToFileURL(path.join(repository, 'src', 'load', 'readHandbook.ts')).href)) as typeof import('../../src/load/readHandbook.ts');
+    const handbook = await readHandbook(content);
+    const correlations = handbook.datasets.flatMap((dataset) => (dataset.correlation === undefined ? [] : [dataset.correlation]));
+    const codes: Code[] = [];
+    if (baselineRoot !== '' && only !== 'current') codes.push(await load('baseline', path.resolve(baselineRoot)));
+    if (only !== 'baseline') codes.push(await load('current', repository));
+    const points = correlations.reduce((sum: number, correlation) => sum + correlation.used.length, 0);
+    console.log(`bench:fitting: ${correlations.length} synthetic datasets (seed ${seed}, ${points} points used), one thread, node ${process.version}`);
+
+    // Warm-up on a slice of the datasets, then compare the records of every dataset (first pass).
+    const records = new Map<string, string[]>();
+    for (const code of codes) pass(code, correlations.slice(0, Math.min(50, correlations.length)), path.join(work, `warm-${code.name}`));
+    const results = new Map<string, Figures[]>(codes.map((code) => [code.name, []]));
+    for (let round = 0; round < passes; round++) {
+      for (const code of round % 2 === 0 ? codes : [...codes].reverse()) {
+        const kept: string[] | undefined = round === 0 && codes.length > 1 ? [] : undefined;
+        results.get(code.name)!.push(pass(code, correlations, path.join(work, `cache-${code.name}`), kept));
+        if (kept) records.set(code.name, kept);
+      }
+    }
+    console.log('| code | pass | fitDataset CPU s | cacheRecord CPU s | writeCachedFit CPU s | pass CPU s | pass wall s | CPU ms per dataset |');
+    console.log('|---|---:|---:|---:|---:|---:|---:|---:|');
+    for (const [name, list] of results) {
+      list.forEach((figures, i) => {
+        console.log(
+          `| ${name} | ${i + 1} | ${seconds(figures.fit)} | ${seconds(figures.previews)} | ${seconds(figures.write)} | ${seconds(figures.cpu)} | ${seconds(figures.wall)} | ${(figures.cpu / correlations.length).toFixed(2)} |`,
+        );
+      });
+    }
+    if (results.has('baseline') && results.has('current')) {
+      const best = (name: string) => Math.min(...results.get(name)!.map((figures) => figures.cpu));
+      console.log(`current/baseline CPU ratio (best pass of each): ${(best('current') / best('baseline')).toFixed(3)}`);
+      const before = records.get('baseline')!;
+      const after = records.get('current')!;
+      const identical = before.filter((text, i) => text === after[i]).length;
+      console.log(`cache records identical to the baseline's: ${identical} of ${before.length}`);
+    }
+  } finally {
+    await rm(work, { recursive: true, force: true });
+  }
+}
+
+await main();
