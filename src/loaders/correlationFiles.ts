@@ -6,12 +6,17 @@
  * not rendered as thousands of Astro routes. A correlation whose stored entry and code are unchanged keeps its
  * folder from the last build (a digest file says what it was written from); folders of correlations no longer
  * in the handbook are deleted. Same input, same bytes: nothing here depends on time or machine.
+ *
+ * The output gets hard links to the cache's files where the file system allows (copies otherwise), so a file of
+ * the cache is never written to in place: a folder to rewrite is deleted and its files are created anew, and a
+ * file linked into an earlier build's output keeps its bytes.
  */
 import { createHash } from 'node:crypto';
-import { copyFile, mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { correlationFiles } from '../components/lib/correlationFiles.ts';
 import { toCacheJson } from '../load/fitCache.ts';
+import { linkOrCopy, type LinkFile } from './linkOrCopy.ts';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
@@ -41,7 +46,8 @@ export async function writeCorrelationFiles(
     if (previous === digest) continue;
     await rm(target, { recursive: true, force: true });
     await mkdir(target, { recursive: true });
-    await Promise.all(correlationFiles(entry, handbook).map((file) => writeFile(path.join(target, file.file), file.text)));
+    // 'wx': a file of the cache is created, never written to (the output may hold a hard link to an older one).
+    await Promise.all(correlationFiles(entry, handbook).map((file) => writeFile(path.join(target, file.file), file.text, { flag: 'wx' })));
     await writeFile(path.join(target, DIGEST), digest);
     written++;
   }
@@ -55,24 +61,30 @@ export async function writeCorrelationFiles(
 }
 
 /**
- * Copy the files written by writeCorrelationFiles into the built site's correlations/<slug>/ folders.
- * @example await copyCorrelationFiles(folder, 'dist') // => number of files copied
+ * Put the files written by writeCorrelationFiles into the built site's correlations/<slug>/ folders: hard links
+ * to the cache's files where the file system allows, copies otherwise (linkOrCopy).
+ * @param link how to link a file (node:fs link; a test passes one that fails, to exercise the copies)
+ * @example await copyCorrelationFiles(folder, 'dist') // => { files: 5100, copied: 0 }
  */
-export async function copyCorrelationFiles(folder: string, outDir: string): Promise<number> {
+export async function copyCorrelationFiles(folder: string, outDir: string, link?: LinkFile): Promise<{ files: number; copied: number }> {
   let manifest: { slugs: string[] };
   try {
     manifest = JSON.parse(await readFile(path.join(folder, MANIFEST), 'utf8')) as { slugs: string[] };
   } catch {
-    return 0; // nothing was written (no correlation was fitted)
+    return { files: 0, copied: 0 }; // nothing was written (no correlation was fitted)
   }
+  let files = 0;
   let copied = 0;
   for (const slug of manifest.slugs) {
     const source = path.join(folder, slug);
     const target = path.join(outDir, 'correlations', slug);
     await mkdir(target, { recursive: true });
     const names = (await readdir(source)).filter((name) => name !== DIGEST);
-    await Promise.all(names.map((name) => copyFile(path.join(source, name), path.join(target, name))));
-    copied += names.length;
+    // Once a link could not be made, the rest go to the same file system: copy them without trying.
+    const copy = copied > 0;
+    const ways = await Promise.all(names.map((name) => linkOrCopy(path.join(source, name), path.join(target, name), { copy, ...(link ? { link } : {}) })));
+    files += names.length;
+    copied += ways.filter((way) => way === 'copied').length;
   }
-  return copied;
+  return { files, copied };
 }

@@ -1,6 +1,6 @@
 /**
- * Astro integration for the per-correlation files (src/loaders/correlationFiles.ts): in a build, copies the files
- * the content loader wrote into the output when the pages are done; under `astro dev`, serves them through one
+ * Astro integration for the per-correlation files (src/loaders/correlationFiles.ts): in a build, links (or copies)
+ * the files the content loader wrote into the output when the pages are done; under `astro dev`, serves them through one
  * route (src/routes/correlationFile.ts) computed on request from the same functions.
  */
 import { fileURLToPath } from 'node:url';
@@ -24,8 +24,10 @@ export function correlationFilesIntegration(): AstroIntegration {
       'astro:config:done': ({ config }) => {
         folder = correlationFilesFolder(config.cacheDir);
       },
-      'astro:build:done': async ({ dir }) => {
-        await copyCorrelationFiles(folder, fileURLToPath(dir));
+      'astro:build:done': async ({ dir, logger }) => {
+        // Hard links to the cache's files (no bytes copied); copies where the output is on another file system.
+        const { copied } = await copyCorrelationFiles(folder, fileURLToPath(dir));
+        if (copied > 0) logger.info(`copied ${copied} correlation files into the output (hard links were not possible there)`);
       },
     },
   };

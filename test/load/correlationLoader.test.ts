@@ -83,8 +83,17 @@ describe('correlationLoader()', () => {
     try {
       const copied = await copyCorrelationFiles(folder, out);
       const second = stored[1]!;
-      expect(copied).toBe(stored.slice(1).reduce((sum, entry) => sum + correlationFiles(entry, identity(entry.slug)).length, 0));
+      expect(copied.files).toBe(stored.slice(1).reduce((sum, entry) => sum + correlationFiles(entry, identity(entry.slug)).length, 0));
+      expect(copied.copied).toBe(0); // hard links: the cache and the output are on one file system here
       expect(readdirSync(path.join(out, 'correlations', second.slug)).sort()).toEqual(correlationFiles(second, identity(second.slug)).map((file) => file.file).sort());
+      // A later build that rewrites the cache (a changed title) leaves the linked files of this output as they were.
+      const published = path.join(out, 'correlations', second.slug, 'coefficients.json');
+      const before = readFileSync(published, 'utf8');
+      const retitled = stored.slice(1).map((entry) => (entry === second ? { ...entry, meta: { ...entry.meta, title: `${entry.meta.title} (changed)` } } : entry));
+      expect(await writeCorrelationFiles(folder, retitled, 'same-version', identity)).toBe(1);
+      expect(readFileSync(path.join(folder, second.slug, 'coefficients.json'), 'utf8')).toContain('(changed)');
+      expect(readFileSync(published, 'utf8')).toBe(before);
+      expect(before).not.toContain('(changed)');
     } finally {
       rmSync(out, { recursive: true, force: true });
     }
