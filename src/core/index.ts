@@ -8,6 +8,7 @@ export type * from './types.ts';
 // Fitting
 export { fitPolynomial } from './fitPolynomial.ts';
 export { fitCurve } from './fitCurve.ts';
+export { fitCurves } from './fitCurves.ts';
 export { fitOrders, type OrderFit } from './fitOrders.ts';
 export { FitError } from './fitError.ts';
 export { validateFitData } from './validateFitInput.ts';

@@ -4,9 +4,10 @@
  * have looked like: for each order in the order table, its curve with its prediction band on a coarse
  * grid, its residuals at (a sample of) the points, and its statistics from the order table. Kept small: SAMPLES
  * curve rows and at most RESIDUAL_SAMPLE residuals per order, numbers rounded for drawing. The published order is
- * the page's own chart and is not repeated. Floating-point fits (fitCurve in the core): a preview is a picture.
+ * the page's own chart and is not repeated. Floating-point fits (fitCurves in the core: the numbers of fitCurve, one
+ * refit per order, from one factorisation): a preview is a picture.
  */
-import { bands, fitCurve, formatNumber, formatRSquared, type FitData, type OrderSelection, type PolynomialFit } from '../core/index.ts';
+import { bands, fitCurves, formatNumber, formatRSquared, type FitData, type OrderSelection, type PolynomialFit } from '../core/index.ts';
 import { evenGrid } from './buildChartData.ts';
 import { roundForChart } from './roundForChart.ts';
 
@@ -95,29 +96,35 @@ export function orderPreviews(input: OrderPreviewInput, fit: PolynomialFit, sele
   };
   const grid = evenGrid(range.min, range.max, SAMPLES);
   const sample = sampleIndices(used.length, RESIDUAL_SAMPLE);
+  const others = selection.orders.filter((row) => row.order !== fit.order);
+  const curves = fitCurves(
+    data,
+    {
+      intercept: settings.intercept,
+      transformX: settings.transform.x,
+      transformY: settings.transform.y,
+      constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
+      range,
+      ...(settings.criterion === 'chiSquare' ? { uncertaintyScale: 'stated' as const } : {}),
+    },
+    others.map((row) => row.order),
+  );
   const previews: OrderPreview[] = [];
-  for (const row of selection.orders) {
-    if (row.order === fit.order) continue;
+  others.forEach((row, i) => {
+    // An order the core refuses (e.g. too few points with the constraints) simply has no preview.
+    const other = curves[i];
+    if (other === null || other === undefined) return;
     try {
-      const other = fitCurve(data, {
-        order: row.order,
-        intercept: settings.intercept,
-        transformX: settings.transform.x,
-        transformY: settings.transform.y,
-        constraints: settings.passThrough.map((point) => ({ x: point.x, y: point.y })),
-        range,
-        ...(settings.criterion === 'chiSquare' ? { uncertaintyScale: 'stated' as const } : {}),
-      });
       previews.push({
         order: row.order,
         curve: bands(other, grid).map((band) => [roundForChart(band.y, 5), roundForChart(band.predictionLow, 4), roundForChart(band.predictionHigh, 4)]),
-        residuals: sample.map((i) => roundForChart(other.residualsOriginal[i] ?? NaN, 3)),
+        residuals: sample.map((j) => roundForChart(other.residualsOriginal[j] ?? NaN, 3)),
         statistics: statisticsOf(row),
       });
     } catch {
-      // An order the core refuses (e.g. too few points with the constraints) simply has no preview.
+      // as for a refused order
     }
-  }
+  });
   const publishedRow = selection.orders.find((row) => row.order === fit.order);
   if (publishedRow === undefined || previews.length === 0) return null;
   return {
