@@ -62,8 +62,12 @@ export function timesPowerOfTen(value: Rational, exponent: number): Rational {
     : rational(value.num, value.den * 10n ** BigInt(-exponent));
 }
 
+/** Number of binary digits of a non-negative integer (0 for 0), from its hexadecimal text: a quarter of the binary text's length to build. */
 function bitLength(value: bigint): number {
-  return value === 0n ? 0 : value.toString(2).length;
+  if (value === 0n) return 0;
+  if (value < 0n) return value.toString(2).length;
+  const hex = value.toString(16);
+  return (hex.length - 1) * 4 + (32 - Math.clz32(parseInt(hex[0]!, 16)));
 }
 
 /**

@@ -13,19 +13,19 @@
  * printed coefficients, full-precision and printed check values at its own check points, and standard errors
  * (S·Σ·Sᵀ in floating point). A re-expressed form is shown only where its printed coefficients, evaluated by
  * Horner's rule in double precision as a designer's copy would be, stay within that 1 % over the range (checked on
- * 201 points against the certified polynomial, evaluated exactly) and need at most 15 significant digits; otherwise
+ * 201 points against the certified polynomial, evaluated exactly where a double-precision screen cannot decide:
+ * printedDeviation.ts) and need at most 15 significant digits; otherwise
  * `shown` is false and `reason` says why (the mapped form, with x converted to the native scale, always works).
  *
  * Cost: O(m²) big-integer operations for the substitution, O(grid·m) exact evaluations for the display check.
  */
 import { checkPoints, fullCheckValues, printedForm } from '../checkValues.ts';
 import { substituteAffineExact, substitutedCovariance } from '../convertBasis.ts';
-import { horner } from '../evaluate.ts';
 import { decimalRational } from '../exact/decimal.ts';
-import { evaluateExact } from '../exact/evaluateExact.ts';
-import { fromDouble, multiply, toNumber, type Rational } from '../exact/rational.ts';
+import { multiply, toNumber, type Rational } from '../exact/rational.ts';
 import { significantDigits } from '../format/significantDigits.ts';
 import type { PolynomialFit, TemperatureScale, TemperatureScaleForm, TemperatureScales, TransformY } from '../types.ts';
+import { printedDeviation } from './printedDeviation.ts';
 import { applyMap, inverseMap, scaleConversion, TEMPERATURE_SCALES } from './temperatureScale.ts';
 
 /** Most significant digits a shown re-expressed coefficient may need: a double carries 15 reliably. */
@@ -43,22 +43,6 @@ export interface NativeForm {
   readonly transformY: TransformY;
   /** Allowed deviation of a printed form at a native x (1 % of the uncertainty of a new observation there). */
   readonly tolerance: (xNative: number) => number;
-}
-
-const GRID = 201;
-
-/** Largest |printed form in double − certified fit| / tolerance over the range of scale S. */
-function printedDeviation(native: NativeForm, toNative: ReturnType<typeof scaleConversion>, printed: readonly number[], range: { min: number; max: number }): number {
-  const factor = toNumber(toNative.factor);
-  const offset = toNumber(toNative.offset);
-  let worst = 0;
-  for (let i = 0; i < GRID; i++) {
-    const x = i === GRID - 1 ? range.max : range.min + ((range.max - range.min) * i) / (GRID - 1);
-    const exact = toNumber(evaluateExact(native.exactCoefficients, applyMap(toNative, fromDouble(x))));
-    const allowed = native.tolerance(factor * x + offset);
-    worst = Math.max(worst, Math.abs(horner(printed, x) - exact) / allowed);
-  }
-  return worst;
 }
 
 function reasonNotShown(digits: readonly number[], deviation: number, nativeScale: TemperatureScale): string | null {
@@ -86,7 +70,9 @@ function otherScale(native: NativeForm, scale: TemperatureScale): TemperatureSca
   const finite = coefficients.every(Number.isFinite);
   const asked = finite ? significantDigits(coefficients, range.min, range.max, tolerance) : coefficients.map(() => 17);
   const printed = printedForm(coefficients, asked, coefficients.map(() => false), 'identity', native.transformY, xs);
-  const deviation = finite ? printedDeviation(native, toNative, printed.printed.map(Number), range) : Infinity;
+  const deviation = finite
+    ? printedDeviation({ exactCoefficients: native.exactCoefficients, toNative, printed: printed.printed.map(Number), range, tolerance: native.tolerance, scaleCoefficients: exact })
+    : Infinity;
   const reason = reasonNotShown(printed.digits, deviation, native.scale);
   const covariance = substitutedCovariance(native.fit.covariance, toNative.offset, toNative.factor);
   return {
@@ -126,7 +112,13 @@ export function temperatureScales(native: NativeForm): TemperatureScales {
     checkValues: fit.checkValues,
     printedCheckValues: fit.printedCheckValues,
     mapped: { center: fit.mapped.map.center, halfWidth: fit.mapped.map.halfWidth },
-    printedDeviation: printedDeviation(native, scaleConversion(native.scale, native.scale), fit.printedCoefficients.map(Number), fit.range),
+    printedDeviation: printedDeviation({
+      exactCoefficients: native.exactCoefficients,
+      toNative: scaleConversion(native.scale, native.scale),
+      printed: fit.printedCoefficients.map(Number),
+      range: fit.range,
+      tolerance: native.tolerance,
+    }),
     shown: true,
     reason: null,
   };
