@@ -41,6 +41,15 @@ function load(reference: StoredFitReference): CachedFit {
   return read.record;
 }
 
+/**
+ * Drop every record kept in memory (a worker that has finished with a correlation calls it, so that its memory
+ * does not grow with the handbook). @example forgetStoredFits()
+ */
+export function forgetStoredFits(): void {
+  kept.clear();
+  keptBytes = 0;
+}
+
 /** The fit behind a stored reference. @example storedFit(entry.fit).order // => 2 */
 export function storedFit(reference: StoredFitReference): PolynomialFit | undefined {
   return load(reference).fit;

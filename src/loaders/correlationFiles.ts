@@ -12,52 +12,124 @@
  * file linked into an earlier build's output keeps its bytes.
  */
 import { createHash } from 'node:crypto';
+import { readFileSync, readdirSync } from 'node:fs';
 import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { correlationFiles } from '../components/lib/correlationFiles.ts';
 import { toCacheJson } from '../load/fitCache.ts';
+import { poolSize } from '../load/fitPool.ts';
+import { forgetStoredFits } from '../load/storedFit.ts';
+import { workerBundle } from '../load/workerBundle.ts';
+import { createWorkerPool, type WorkerPool } from '../load/workerPool.ts';
+import { DIGEST_FILE, writeCorrelationFolder } from './correlationFolder.ts';
 import { linkOrCopy, type LinkFile } from './linkOrCopy.ts';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
-const DIGEST = '.digest';
 const MANIFEST = 'manifest.json';
+
+export interface WriteFilesOptions {
+  /**
+   * Write the folders in worker threads (src/loaders/filesWorker.ts) when many are to be written: `root` is the
+   * package root holding src/, `folder` where the worker's bundle is kept, `minimumJobs` (default
+   * POOL_MINIMUM_JOBS) the fewest folders to write that start workers. Without it, or when no worker can start,
+   * every folder is written in this thread. The files are the same either way.
+   */
+  readonly workers?: { readonly root: string; readonly folder: string; readonly minimumJobs?: number };
+}
+
+type FolderJob = { target: string; entry: CorrelationEntry; handbook: HandbookIdentity; digest: string };
+
+/** A hex digest of every source file under `<root>/src` (what the files worker's bundle can be made of). */
+function sourcesVersion(root: string): string {
+  const hash = createHash('sha256');
+  const walk = (folder: string): void => {
+    for (const item of readdirSync(folder, { withFileTypes: true }).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
+      const full = path.join(folder, item.name);
+      if (item.isDirectory()) walk(full);
+      else hash.update(path.relative(root, full)).update('\0').update(readFileSync(full)).update('\0');
+    }
+  };
+  try {
+    hash.update(readFileSync(path.join(root, 'package.json')));
+    walk(path.join(root, 'src'));
+  } catch {
+    // no sources: no worker bundle either (workerBundle finds no entry)
+  }
+  return hash.digest('hex');
+}
+
+/** A pool of files workers for `jobs` folders to write, or undefined (then they are written in this thread). */
+async function filesPool(jobs: number, options: WriteFilesOptions): Promise<WorkerPool<FolderJob, { files: number }> | undefined> {
+  const workers = options.workers;
+  if (workers === undefined) return undefined;
+  const size = poolSize(jobs, workers.minimumJobs);
+  if (size < 1) return undefined;
+  const bundle = await workerBundle(path.join(workers.root, 'src', 'loaders', 'filesWorker.ts'), 'files-worker', sourcesVersion(workers.root), workers.folder);
+  return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size);
+}
+
+/** Run `work` on every item, at most `limit` at a time. */
+async function eachLimited<T>(items: readonly T[], limit: number, work: (item: T) => Promise<unknown>): Promise<void> {
+  let next = 0;
+  const lane = async () => {
+    while (next < items.length) await work(items[next++]!);
+  };
+  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, lane));
+}
 
 /**
  * Write the files of every fitted entry into `folder`/<slug>/ (unless unchanged) and the list of slugs.
  * @param version the files code version (filesCodeVersion), part of each folder's digest
  * @param identity the handbook identity of each correlation's files (handbookIdentity.ts identityOf)
- * @example await writeCorrelationFiles(folder, entries, version, (slug) => identityOf(slug, settings, base, site)) // => folders written
+ * @returns how many folders were written, and how many of them by worker threads
+ * @example await writeCorrelationFiles(folder, entries, version, (slug) => identityOf(slug, settings, base, site)) // => { written: 13, byWorkers: 0 }
  */
 export async function writeCorrelationFiles(
   folder: string,
   entries: readonly CorrelationEntry[],
   version: string,
   identity: (slug: string) => HandbookIdentity,
-): Promise<number> {
+  options: WriteFilesOptions = {},
+): Promise<{ written: number; byWorkers: number }> {
   await mkdir(folder, { recursive: true });
   const fitted = entries.filter((entry) => entry.fit !== null);
-  let written = 0;
-  for (const entry of fitted) {
+  const jobs: FolderJob[] = [];
+  await eachLimited(fitted, 16, async (entry) => {
     const target = path.join(folder, entry.slug);
     const handbook = identity(entry.slug);
     const digest = createHash('sha256').update(version).update('\0').update(toCacheJson([entry, handbook])).digest('hex');
-    const previous = await readFile(path.join(target, DIGEST), 'utf8').catch(() => undefined);
-    if (previous === digest) continue;
-    await rm(target, { recursive: true, force: true });
-    await mkdir(target, { recursive: true });
-    // 'wx': a file of the cache is created, never written to (the output may hold a hard link to an older one).
-    await Promise.all(correlationFiles(entry, handbook).map((file) => writeFile(path.join(target, file.file), file.text, { flag: 'wx' })));
-    await writeFile(path.join(target, DIGEST), digest);
-    written++;
+    const previous = await readFile(path.join(target, DIGEST_FILE), 'utf8').catch(() => undefined);
+    if (previous !== digest) jobs.push({ target, entry, handbook, digest });
+  });
+  jobs.sort((a, b) => (a.target < b.target ? -1 : 1));
+  const pool = await filesPool(jobs.length, options);
+  let byWorkers = 0;
+  try {
+    // In this thread a few at a time: the file writes of one overlap the next one's computing.
+    await eachLimited(jobs, pool === undefined ? 4 : jobs.length, async (job) => {
+      if (pool !== undefined) {
+        try {
+          await pool.run(job);
+          byWorkers++;
+          return;
+        } catch {
+          // a worker that failed: write here instead
+        }
+      }
+      await writeCorrelationFolder(job.target, job.entry, job.handbook, job.digest);
+    });
+  } finally {
+    await pool?.close();
   }
+  // The fit records read here are not needed again by this thread.
+  forgetStoredFits();
   const slugs = fitted.map((entry) => entry.slug).sort();
   const keep = new Set([...slugs, MANIFEST]);
   for (const name of await readdir(folder)) {
     if (!keep.has(name)) await rm(path.join(folder, name), { recursive: true, force: true });
   }
   await writeFile(path.join(folder, MANIFEST), `${JSON.stringify({ slugs })}\n`);
-  return written;
+  return { written: jobs.length, byWorkers };
 }
 
 /**
@@ -79,7 +151,7 @@ export async function copyCorrelationFiles(folder: string, outDir: string, link?
     const source = path.join(folder, slug);
     const target = path.join(outDir, 'correlations', slug);
     await mkdir(target, { recursive: true });
-    const names = (await readdir(source)).filter((name) => name !== DIGEST);
+    const names = (await readdir(source)).filter((name) => name !== DIGEST_FILE);
     // Once a link could not be made, the rest go to the same file system: copy them without trying.
     const copy = copied > 0;
     const ways = await Promise.all(names.map((name) => linkOrCopy(path.join(source, name), path.join(target, name), { copy, ...(link ? { link } : {}) })));

@@ -89,7 +89,9 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     // The handbook identity the files carry, as the pages compute it (handbookIdentity.ts) from the same settings.
     const settings = (await readHandbookSettings(displayDirectory)).settings ?? handbookSettingsSchema.parse({});
     const identity = (slug: string) => identityOf(slug, settings, context.config.base, context.config.site);
-    await writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity);
+    // Many folders to write are written in worker threads (the fits' workers have finished by now).
+    const workers = { root, folder: fileURLToPath(new URL('correlary-worker/', context.config.cacheDir)) };
+    await writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers });
   }
   const { readingMs, fittingMs } = handbook.timing;
   const seconds = (ms: number): string => (ms / 1000).toFixed(2);

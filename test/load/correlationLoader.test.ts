@@ -75,9 +75,9 @@ describe('correlationLoader()', () => {
     for (const file of correlationFiles(first, identity(first.slug))) expect(readFileSync(path.join(folder, first.slug, file.file), 'utf8')).toBe(file.text);
     const written = JSON.parse(readFileSync(path.join(folder, first.slug, 'coefficients.json'), 'utf8')) as { handbook: { url: string } };
     expect(written.handbook.url).toBe(`https://handbook.example.org/correlations/${first.slug}/`);
-    expect(await writeCorrelationFiles(folder, stored, 'same-version', identity)).toBe(stored.length);
-    expect(await writeCorrelationFiles(folder, stored, 'same-version', identity)).toBe(0);
-    expect(await writeCorrelationFiles(folder, stored.slice(1), 'same-version', identity)).toBe(0);
+    expect((await writeCorrelationFiles(folder, stored, 'same-version', identity)).written).toBe(stored.length);
+    expect((await writeCorrelationFiles(folder, stored, 'same-version', identity)).written).toBe(0);
+    expect((await writeCorrelationFiles(folder, stored.slice(1), 'same-version', identity)).written).toBe(0);
     expect(readdirSync(folder)).not.toContain(first.slug);
     const out = mkdtempSync(path.join(tmpdir(), 'correlary-loader-out-'));
     try {
@@ -90,13 +90,35 @@ describe('correlationLoader()', () => {
       const published = path.join(out, 'correlations', second.slug, 'coefficients.json');
       const before = readFileSync(published, 'utf8');
       const retitled = stored.slice(1).map((entry) => (entry === second ? { ...entry, meta: { ...entry.meta, title: `${entry.meta.title} (changed)` } } : entry));
-      expect(await writeCorrelationFiles(folder, retitled, 'same-version', identity)).toBe(1);
+      expect((await writeCorrelationFiles(folder, retitled, 'same-version', identity)).written).toBe(1);
       expect(readFileSync(path.join(folder, second.slug, 'coefficients.json'), 'utf8')).toContain('(changed)');
       expect(readFileSync(published, 'utf8')).toBe(before);
       expect(before).not.toContain('(changed)');
     } finally {
       rmSync(out, { recursive: true, force: true });
     }
+  });
+
+  it('folders written by worker threads hold exactly the files written in one thread (every file, byte for byte)', async () => {
+    const { context, entries } = fakeContext();
+    await correlationLoader({ directory: 'content' }).load(context);
+    const stored = [...entries.values()].map((item) => item.data as CorrelationEntry);
+    const settings = (await readHandbookSettings('content')).settings ?? handbookSettingsSchema.parse({});
+    const identity = (slug: string) => identityOf(slug, settings, '/', 'https://handbook.example.org');
+    const here = path.join(cacheDir, 'files-here');
+    const pooled = path.join(cacheDir, 'files-pooled');
+    const bundles = path.join(cacheDir, 'files-bundles');
+    const fitted = stored.filter((entry) => entry.fit !== null).length;
+    expect(await writeCorrelationFiles(here, stored, 'v', identity)).toEqual({ written: fitted, byWorkers: 0 });
+    // Every folder of the second one is written by a worker.
+    expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 } })).toEqual({ written: fitted, byWorkers: fitted });
+    expect(readdirSync(bundles).filter((name) => /^files-worker-[0-9a-f]{16}\.mjs$/.test(name))).toHaveLength(1);
+    const listing = (root: string) => readdirSync(root, { recursive: true, withFileTypes: true }).filter((item) => item.isFile()).map((item) => path.relative(root, path.join(item.parentPath, item.name))).sort();
+    expect(listing(pooled)).toEqual(listing(here));
+    expect(listing(here).length).toBeGreaterThan(fitted * 5);
+    for (const file of listing(here)) expect(readFileSync(path.join(pooled, file)).equals(readFileSync(path.join(here, file))), file).toBe(true);
+    // Unchanged: nothing to write, no worker started.
+    expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 } })).toEqual({ written: 0, byWorkers: 0 });
   });
 
   it('correlationLoader fails the build on any error, logging every message', async () => {

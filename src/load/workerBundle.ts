@@ -1,0 +1,49 @@
+/**
+ * One worker thread's code as a single file: a TypeScript entry under the package root bundled with esbuild
+ * (present wherever Astro is, through Vite) into a folder of the build's cache, once per version of the code it is
+ * made of, so that it runs the same way from the TypeScript sources and from an installed package. Used by the
+ * fitting pool (src/load/fitPool.ts) and the download writers (src/loaders/filesPool.ts).
+ */
+import { existsSync, mkdirSync, readdirSync, renameSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+
+/**
+ * The bundle `<folder>/<prefix>-<version, 16 hex digits>.mjs` of `entry`, built when missing (bundles of other
+ * versions with the same prefix are deleted); undefined when it cannot be built (no esbuild, no sources).
+ * @param entry the worker's TypeScript source file
+ * @param version a hex digest of the code the bundle is made of
+ * @example await workerBundle('src/load/fitWorker.ts', 'fit-worker', fitCodeVersion('.'), '.cache/correlary-worker') // => '.cache/correlary-worker/fit-worker-1f2e….mjs'
+ */
+export async function workerBundle(entry: string, prefix: string, version: string, folder: string): Promise<string | undefined> {
+  const target = path.join(folder, `${prefix}-${version.slice(0, 16)}.mjs`);
+  if (existsSync(target)) return target;
+  if (!existsSync(entry)) return undefined;
+  try {
+    // Required, not imported: inside Vite's module runner (Astro's content loading) a dynamic import goes through
+    // the runner, which may be closed by then.
+    const { build } = createRequire(import.meta.url)('esbuild') as typeof import('esbuild');
+    mkdirSync(folder, { recursive: true });
+    const temporary = `${target}.${process.pid}.tmp.mjs`;
+    await build({
+      entryPoints: [entry],
+      outfile: temporary,
+      bundle: true,
+      platform: 'node',
+      format: 'esm',
+      target: 'node20',
+      // The bundled CommonJS packages call require; an ES module has none of its own.
+      banner: { js: "import { createRequire as __correlaryRequire } from 'node:module'; const require = __correlaryRequire(import.meta.url);" },
+      logLevel: 'silent',
+    });
+    renameSync(temporary, target);
+    // Bundles of older code are never used again.
+    const old = new RegExp(`^${prefix}-[0-9a-f]{16}\\.mjs$`);
+    for (const name of readdirSync(folder)) {
+      if (old.test(name) && path.join(folder, name) !== target) rmSync(path.join(folder, name), { force: true });
+    }
+    return target;
+  } catch {
+    return undefined;
+  }
+}

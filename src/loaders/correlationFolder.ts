@@ -1,0 +1,28 @@
+/**
+ * Writing one correlation's folder of downloads in the cache (src/loaders/correlationFiles.ts), in the loader's
+ * thread or in a worker (src/loaders/filesWorker.ts): the same function either way, so the same bytes.
+ */
+import { mkdir, rm, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { correlationFiles } from '../components/lib/correlationFiles.ts';
+import type { HandbookIdentity } from '../export/index.ts';
+import type { CorrelationEntry } from '../schema/index.ts';
+
+/** The file in each folder that says what it was written from. */
+export const DIGEST_FILE = '.digest';
+
+/**
+ * Replace `target` by a new folder holding the files of `entry` (correlationFiles) and `digest`. The old folder is
+ * deleted and every file created anew ('wx'), never written to in place: the output of an earlier build may hold
+ * hard links to them (src/loaders/linkOrCopy.ts).
+ * @example await writeCorrelationFolder('.astro/correlary-files/water-cp', entry, identity, digest) // => 7 (files)
+ */
+export async function writeCorrelationFolder(target: string, entry: CorrelationEntry, handbook: HandbookIdentity, digest: string): Promise<number> {
+  await rm(target, { recursive: true, force: true });
+  await mkdir(target, { recursive: true });
+  const files = correlationFiles(entry, handbook);
+  await Promise.all(files.map((file) => writeFile(path.join(target, file.file), file.text, { flag: 'wx' })));
+  // Last: a folder left half-written by a failed build has no digest and is written again.
+  await writeFile(path.join(target, DIGEST_FILE), digest, { flag: 'wx' });
+  return files.length;
+}
