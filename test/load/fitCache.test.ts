@@ -37,6 +37,17 @@ describe('fit cache', () => {
     expect(Object.is(back.a[3], -0)).toBe(true);
   });
 
+  it('fromCacheJson reads ±Infinity and −0 without NaN, and a tag-like text inside a string stays text', () => {
+    // Expected values written by hand; JSON.stringify escapes the quotes of the string, so it is no tag.
+    const value = { a: [Infinity, -Infinity, -0, 2], note: '{"$number":"Infinity"}', nested: { b: [[-0, Infinity]] } };
+    const back = fromCacheJson(toCacheJson(value)) as typeof value;
+    expect(back).toEqual(value);
+    expect(Object.is(back.a[2], -0)).toBe(true);
+    expect(Object.is(back.nested.b[0]![0], -0)).toBe(true);
+    expect(back.note).toBe('{"$number":"Infinity"}');
+    expect(fromCacheJson(toCacheJson([Infinity, NaN, -0]))).toEqual([Infinity, NaN, -0]);
+  });
+
   it('fitHandbook with a cache: the first run fits and writes, the second reads back the same results', async () => {
     const content = path.join(root, 'content');
     const fitCache = { directory: path.join(root, 'cache'), version: 'test-1' };
