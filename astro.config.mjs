@@ -12,6 +12,7 @@ import { defineConfig } from 'astro/config';
 import { basePathSchema, siteUrlSchema } from './src/schema/index.ts';
 import { contentDirectory, formatDiagnostic, readHandbookSettings } from './src/load/index.ts';
 import { correlationFilesIntegration } from './src/loaders/correlationFilesIntegration.ts';
+import { dataStoreIntegration } from './src/loaders/dataStoreIntegration.ts';
 
 // A BASE_URL in the environment (test runners set one) would replace import.meta.env.BASE_URL in the pages and
 // point every link at the wrong base path; the base path comes from the settings below, never from there.
@@ -37,6 +38,7 @@ export default defineConfig({
   base: override('CORRELARY_BASE', basePathSchema) ?? settings.basePath,
   trailingSlash: 'ignore',
   build: { format: 'directory' },
-  // Each correlation's downloads are written once by the content loader and copied in when the build is done.
-  integrations: [correlationFilesIntegration()],
+  // Each correlation's downloads are written once by the content loader and linked in when the build is done; the
+  // content store is bundled as one JSON string rather than a large literal (src/loaders/dataStoreIntegration.ts).
+  integrations: [correlationFilesIntegration(), dataStoreIntegration()],
 });

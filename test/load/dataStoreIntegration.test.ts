@@ -1,0 +1,59 @@
+/**
+ * dataStoreIntegration: in a build, Astro's data store module becomes `export default JSON.parse("…")` of the
+ * store file. The check is independent of the rewrite: the module, evaluated by Node, must hold exactly what
+ * JSON.parse gives for the file (the array Astro's own module spells out as a literal; see
+ * astro/dist/content/vite-plugin-content-virtual-mod.js, which builds it from JSON.parse of the same file).
+ */
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { afterAll, describe, expect, it } from 'vitest';
+import { dataStoreIntegration, dataStoreModule } from '../../src/loaders/dataStoreIntegration.ts';
+
+const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-data-store-'));
+afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
+
+/** A store file as Astro writes it (devalue's flattened form), with text that is awkward inside JavaScript. */
+const store = JSON.stringify([
+  ['Map', 1, 2],
+  'correlations',
+  ['Map', 3, 4],
+  'water-cp',
+  { id: 3, data: 5 },
+  { title: 'Quotes " \' ` ${x} \\ </script> \u2028 \u2029 \u0000 é 𝜌', values: [0.1, -0, 1e-300, 12345678901234567890], nested: { empty: '', deeper: [null, true, false] } },
+]);
+
+async function evaluate(code: string): Promise<unknown> {
+  const file = path.join(cacheDir, `module-${Math.random().toString(36).slice(2)}.mjs`);
+  writeFileSync(file, code);
+  return ((await import(pathToFileURL(file).href)) as { default: unknown }).default;
+}
+
+type Hooks = { 'astro:config:setup': (options: unknown) => void };
+type Plugin = { name: string; transform: (code: string, id: string) => { code: string } | null };
+
+describe('dataStoreIntegration()', () => {
+  it('dataStoreModule evaluates to exactly what JSON.parse gives for the store file', async () => {
+    expect(await evaluate(dataStoreModule(store))).toStrictEqual(JSON.parse(store));
+  });
+
+  it('dataStoreModule refuses a store file that is not JSON', () => {
+    expect(() => dataStoreModule('[1, 2')).toThrow(SyntaxError);
+  });
+
+  it('in a build, rewrites only the data store module, from the store file in the cache folder; in dev, nothing', async () => {
+    writeFileSync(path.join(cacheDir, 'data-store.json'), store);
+    const plugins: Plugin[] = [];
+    const setup = (dataStoreIntegration().hooks as unknown as Hooks)['astro:config:setup'];
+    const config = { cacheDir: pathToFileURL(`${cacheDir}/`) };
+    setup({ command: 'dev', config, updateConfig: (update: { vite: { plugins: Plugin[] } }) => plugins.push(...update.vite.plugins) });
+    expect(plugins).toHaveLength(0);
+    setup({ command: 'build', config, updateConfig: (update: { vite: { plugins: Plugin[] } }) => plugins.push(...update.vite.plugins) });
+    expect(plugins).toHaveLength(1);
+    const plugin = plugins[0]!;
+    expect(plugin.transform('export default 1', '/src/pages/index.astro')).toBeNull();
+    const rewritten = plugin.transform('export default [/* Astro spells the store out here */]', '\0astro:data-layer-content');
+    expect(await evaluate(rewritten!.code)).toStrictEqual(JSON.parse(store));
+  });
+});
