@@ -84,11 +84,17 @@ export function fitCurves(data: FitData, options: Omit<FitOptions, 'order'>, ord
       }
     });
   }
-  const checked = orders.map((order) => validated(data, { ...options, order }));
-  const first = checked.find((value) => value !== null);
-  if (first === undefined || first === null) return orders.map(() => null);
-  const { intercept, transformX, transformY, confidence, range } = first;
+  // validateFitInput's checks that depend on the order (without constraints), for each order; the others (data,
+  // range, transform domain, confidence) once, with the first order that passes these.
   const n = data.x.length;
+  const withIntercept = options.intercept ?? true;
+  const checked = orders.map(
+    (order) => Number.isInteger(order) && order >= 0 && (withIntercept || order > 0) && n >= Math.max(1, order + (withIntercept ? 1 : 0)),
+  );
+  const firstOrder = orders.find((_, i) => checked[i]);
+  const first = firstOrder === undefined ? null : validated(data, { ...options, order: firstOrder });
+  if (first === null) return orders.map(() => null);
+  const { intercept, transformX, transformY, confidence, range } = first;
   const { u, v } = transformData(data.x, data.y, transformX, transformY);
   const weighted = data.uncertainty !== undefined;
   const uncertaintyScale: 'stated' | 'scatter' = weighted && options.uncertaintyScale === 'stated' ? 'stated' : 'scatter';
@@ -98,7 +104,7 @@ export function fitCurves(data: FitData, options: Omit<FitOptions, 'order'>, ord
   const firstPower = intercept ? 0 : 1;
   const powersOf = (order: number) => Array.from({ length: order + 1 - firstPower }, (_, j) => j + firstPower);
   // Orders solveFit would refuse before factoring (too few distinct x; fewer points than coefficients).
-  const usable = orders.map((order, i) => checked[i] !== null && powersOf(order).length <= distinct && powersOf(order).length <= n);
+  const usable = orders.map((order, i) => checked[i]! && powersOf(order).length <= distinct && powersOf(order).length <= n);
   const highest = Math.max(...orders.filter((_, i) => usable[i]));
   if (!Number.isFinite(highest)) return orders.map(() => null);
 

@@ -63,9 +63,30 @@ function reviver(_key: string, value: unknown): unknown {
   return value;
 }
 
-/** JSON text of any plain value, keeping NaN, ±Infinity and −0. @example toCacheJson([NaN]) // => '[{"$number":"NaN"}]' */
+/**
+ * True when the replacer could change what JSON.stringify writes for `value`: it holds a number JSON has no text for
+ * (NaN, ±Infinity, −0), or an object with a toJSON method (whose result the scan does not follow), or it nests deeper
+ * than the scan goes. Visits what JSON.stringify visits: array elements and own enumerable string keys.
+ */
+function needsReplacer(value: unknown, depth: number): boolean {
+  if (typeof value === 'number') return !Number.isFinite(value) || Object.is(value, -0);
+  if (value === null || typeof value !== 'object') return false;
+  if (depth > 200 || typeof (value as { toJSON?: unknown }).toJSON === 'function') return true;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (needsReplacer(value[i], depth + 1)) return true;
+    return false;
+  }
+  for (const key of Object.keys(value)) if (needsReplacer((value as Record<string, unknown>)[key], depth + 1)) return true;
+  return false;
+}
+
+/**
+ * JSON text of any plain value, keeping NaN, ±Infinity and −0. The replacer returns every other value unchanged, so a
+ * value without such numbers is written by JSON.stringify alone (same text, without a call back per value).
+ * @example toCacheJson([NaN]) // => '[{"$number":"NaN"}]'
+ */
 export function toCacheJson(value: unknown): string {
-  return JSON.stringify(value, replacer);
+  return needsReplacer(value, 0) ? JSON.stringify(value, replacer) : JSON.stringify(value);
 }
 
 /**

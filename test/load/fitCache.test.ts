@@ -6,6 +6,7 @@
 import { cp, mkdtemp, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitHandbook } from '../../src/load/index.ts';
 import { fitCacheKey, fromCacheJson, readCachedFit, toCacheJson } from '../../src/load/fitCache.ts';
@@ -46,6 +47,30 @@ describe('fit cache', () => {
     expect(Object.is(back.nested.b[0]![0], -0)).toBe(true);
     expect(back.note).toBe('{"$number":"Infinity"}');
     expect(fromCacheJson(toCacheJson([Infinity, NaN, -0]))).toEqual([Infinity, NaN, -0]);
+  });
+
+  it('toCacheJson writes exactly the text of JSON.stringify with a replacer that tags NaN, ±Infinity and −0, for any value', () => {
+    // The reference: the tagging rule written out here independently (the file format of fit cache records).
+    const reference = (value: unknown) =>
+      JSON.stringify(value, (_key, item: unknown) =>
+        typeof item === 'number' && (!Number.isFinite(item) || Object.is(item, -0)) ? { $number: Object.is(item, -0) ? '-0' : String(item) } : item,
+      );
+    const special = fc.constantFrom(NaN, Infinity, -Infinity, -0, 0, 1e-320, 1.5);
+    const leaf = fc.oneof(fc.double(), special, fc.string(), fc.boolean(), fc.constant(null), fc.constant(undefined));
+    const value = fc.letrec((tie) => ({
+      node: fc.oneof({ depthSize: 'small' }, leaf, fc.array(tie('node')), fc.dictionary(fc.string(), tie('node'))),
+    })).node;
+    fc.assert(
+      fc.property(value, (item) => {
+        expect(toCacheJson(item)).toBe(reference(item));
+      }),
+      { numRuns: 500, seed: 10 },
+    );
+    // Objects JSON.stringify treats specially: a toJSON method, typed arrays, boxed numbers, getters.
+    const withGetter = Object.defineProperty({}, 'lazy', { enumerable: true, get: () => [NaN, 2] });
+    for (const item of [{ toJSON: () => NaN }, new Float64Array([1, NaN, -0]), new Float64Array([1, 2]), [Object(NaN)], withGetter, { a: [[[{ b: -0 }]]] }]) {
+      expect(toCacheJson(item)).toBe(reference(item));
+    }
   });
 
   it('fitHandbook with a cache: the first run fits and writes, the second reads back the same results', async () => {

@@ -15,7 +15,7 @@ export interface ScaledIntegers {
   readonly exponent: number;
 }
 
-interface DecimalParts {
+export interface DecimalParts {
   readonly digits: bigint;
   readonly exponent: number;
 }
@@ -36,7 +36,11 @@ export function decimalParts(value: number): DecimalParts {
 
 /** Bring values to one decimal exponent (the smallest among them). @example scaleToIntegers([1.5, 20]) // => { ints: [15n, 200n], exponent: -1 } */
 export function scaleToIntegers(values: readonly number[], extraExponents: readonly number[] = []): ScaledIntegers {
-  const parts = values.map(decimalParts);
+  return scalePartsToIntegers(values.map(decimalParts), extraExponents);
+}
+
+/** scaleToIntegers for values already split by decimalParts (each value is read once). @example scalePartsToIntegers([decimalParts(1.5)]) // => { ints: [15n], exponent: -1 } */
+export function scalePartsToIntegers(parts: readonly DecimalParts[], extraExponents: readonly number[] = []): ScaledIntegers {
   let exponent = Math.min(0, ...extraExponents);
   for (const part of parts) if (part.digits !== 0n && part.exponent < exponent) exponent = part.exponent;
   const ints = parts.map((part) => (part.digits === 0n ? 0n : part.digits * 10n ** BigInt(part.exponent - exponent)));
@@ -45,11 +49,13 @@ export function scaleToIntegers(values: readonly number[], extraExponents: reado
 
 /** Smallest decimal exponent among values (0 if all are integers). @example minExponent([1.25, 3, 0.5]) // => -2 */
 export function minExponent(values: readonly number[]): number {
+  return minPartsExponent(values.map(decimalParts));
+}
+
+/** minExponent for values already split by decimalParts. @example minPartsExponent([decimalParts(1.25)]) // => -2 */
+export function minPartsExponent(parts: readonly DecimalParts[]): number {
   let exponent = 0;
-  for (const value of values) {
-    const part = decimalParts(value);
-    if (part.digits !== 0n && part.exponent < exponent) exponent = part.exponent;
-  }
+  for (const part of parts) if (part.digits !== 0n && part.exponent < exponent) exponent = part.exponent;
   return exponent;
 }
 

@@ -19,7 +19,7 @@
  * the data and with m, so this is meant for the one chosen fit, not inner loops.
  */
 import { solveExact } from './bareiss.ts';
-import { minExponent, scaleToIntegers } from './decimal.ts';
+import { decimalParts, minPartsExponent, scalePartsToIntegers, scaleToIntegers } from './decimal.ts';
 import { rational, timesPowerOfTen, toNumber, type Rational } from './rational.ts';
 
 export interface ExactProblem {
@@ -63,14 +63,19 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
   const p = powers.length;
   const q = constraints.length;
 
-  const eu = Math.min(minExponent(problem.u), minExponent(constraints.map((c) => c.u)));
-  const ev = Math.min(minExponent(problem.v), minExponent(constraints.map((c) => c.v)));
-  const U = scaleToIntegers(problem.u, [eu]).ints;
-  const V = scaleToIntegers(problem.v, [ev]).ints;
+  // Each value is read as a decimal once (decimalParts), then brought to the common exponent.
+  const partsU = problem.u.map(decimalParts);
+  const partsV = problem.v.map(decimalParts);
+  const partsCU = constraints.map((c) => decimalParts(c.u));
+  const partsCV = constraints.map((c) => decimalParts(c.v));
+  const eu = Math.min(minPartsExponent(partsU), minPartsExponent(partsCU));
+  const ev = Math.min(minPartsExponent(partsV), minPartsExponent(partsCV));
+  const U = scalePartsToIntegers(partsU, [eu]).ints;
+  const V = scalePartsToIntegers(partsV, [ev]).ints;
   const scaledW = problem.weights ? scaleToIntegers(problem.weights) : { ints: U.map(() => 1n), exponent: 0 };
   const W = scaledW.ints;
-  const CU = scaleToIntegers(constraints.map((c) => c.u), [eu]).ints;
-  const CV = scaleToIntegers(constraints.map((c) => c.v), [ev]).ints;
+  const CU = scalePartsToIntegers(partsCU, [eu]).ints;
+  const CV = scalePartsToIntegers(partsCV, [ev]).ints;
 
   // Power sums Σ W U^k for k = 0..2m and Σ W U^k V for k = 0..m.
   const maxPower = 2 * order;
