@@ -9,5 +9,12 @@ import { Matrix } from 'ml-matrix';
  * @example designMatrix([-1, 0.5], [0, 1, 2]).to2DArray() // => [[1, -1, 1], [1, 0.5, 0.25]]
  */
 export function designMatrix(values: readonly number[], powers: readonly number[], rowScale?: readonly number[]): Matrix {
-  return new Matrix(values.map((value, i) => powers.map((k) => value ** k * (rowScale ? rowScale[i]! : 1))));
+  // Written straight into the matrix's rows (no intermediate arrays); an empty list is the 0×0 matrix, as before.
+  if (values.length === 0) return new Matrix([]);
+  const matrix = new Matrix(values.length, powers.length);
+  values.forEach((value, i) => {
+    const scale = rowScale ? rowScale[i]! : 1;
+    powers.forEach((k, j) => matrix.set(i, j, value ** k * scale));
+  });
+  return matrix;
 }

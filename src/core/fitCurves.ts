@@ -118,7 +118,8 @@ export function fitCurves(data: FitData, options: Omit<FitOptions, 'order'>, ord
     for (let i = 0; i < n; i++) sum += A.get(i, j) ** 2;
     norms.push(Math.sqrt(sum) || 1);
   }
-  const scaled = A.clone().divRowVector(norms);
+  const scaled = new Matrix(n, columns);
+  for (let i = 0; i < n; i++) for (let j = 0; j < columns; j++) scaled.set(i, j, A.get(i, j) / norms[j]!);
   const qr = new QrDecomposition(scaled) as unknown as QrStorage;
   const factors = qr.QR.to2DArray();
   const rows = A.to2DArray();

@@ -97,7 +97,9 @@ export function solveLeastSquares(
   if (n < k) throw new FitError('too-few-points', `${n} points cannot determine ${k} free coefficients`);
 
   const norms = columnNorms(free);
-  const scaled = free.clone().divRowVector(norms);
+  // free with each column divided by its norm (divRowVector's arithmetic), written straight into a new matrix.
+  const scaled = new Matrix(n, k);
+  for (let i = 0; i < n; i++) for (let j = 0; j < k; j++) scaled.set(i, j, free.get(i, j) / norms[j]!);
   const qr = new QrDecomposition(scaled);
   const svd = new SingularValueDecomposition(qr.upperTriangularMatrix, { computeLeftSingularVectors: false });
   const singular = svd.diagonal;
