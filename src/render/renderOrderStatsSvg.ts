@@ -5,8 +5,8 @@
  * statistics (s, LOO RMSE, χ²/dof) use a log axis, AICc and BIC a linear one. O(orders × panels).
  */
 import { scaleLinear, scaleLog, type ScaleContinuousNumeric } from 'd3-scale';
-import { line } from 'd3-shape';
 import { CHART_COLORS } from './chartLayout.ts';
+import { linePath } from './chartPaths.ts';
 import { paddedExtent } from './chartScales.ts';
 import { escapeXml } from './escapeXml.ts';
 import { c } from './svgAxes.ts';
@@ -41,7 +41,7 @@ export function renderOrderStatsSvg(panels: readonly OrderStatPanel[], published
     const y: ScaleContinuousNumeric<number, number> = panel.log && values.length > 0
       ? scaleLog().domain([Math.min(...values) / 1.5, Math.max(...values) * 1.5]).range([PANEL.height - PANEL.bottom, PANEL.top])
       : scaleLinear().domain(paddedExtent(values)).nice().range([PANEL.height - PANEL.bottom, PANEL.top]);
-    const path = line<readonly [number, number]>().digits(2).x((v) => x(v[0])).y((v) => y(v[1]))(finite) ?? '';
+    const path = linePath(finite, x, y, 1);
     // Log axes: the powers of ten inside the domain, or else the smallest and largest value; linear: about 4 ticks.
     const decades = panel.log ? y.ticks().filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9) : [];
     const ticks = panel.log ? (decades.length >= 2 ? decades : values.length > 0 ? [Math.min(...values), Math.max(...values)] : []) : y.ticks(4);
