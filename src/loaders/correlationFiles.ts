@@ -151,7 +151,8 @@ export async function copyCorrelationFiles(folder: string, outDir: string, link?
     const source = path.join(folder, slug);
     const target = path.join(outDir, 'correlations', slug);
     await mkdir(target, { recursive: true });
-    const names = (await readdir(source)).filter((name) => name !== DIGEST_FILE);
+    // Not the digest nor the page parts: names starting with a dot are the cache's own (correlationFolder.ts).
+    const names = (await readdir(source)).filter((name) => !name.startsWith('.'));
     // Once a link could not be made, the rest go to the same file system: copy them without trying.
     const copy = copied > 0;
     const ways = await Promise.all(names.map((name) => linkOrCopy(path.join(source, name), path.join(target, name), { copy, ...(link ? { link } : {}) })));

@@ -5,10 +5,13 @@
 import { mkdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { correlationFiles } from '../components/lib/correlationFiles.ts';
+import { snippetKinds } from '../components/lib/entrySnippets.ts';
+import { PAGE_PARTS_FILE, pageParts } from '../components/lib/pageParts.ts';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
-/** The file in each folder that says what it was written from. */
+/** The file in each folder that says what it was written from. Files whose name starts with a dot (this one and
+ * the page parts, src/components/lib/pageParts.ts) stay out of the output. */
 export const DIGEST_FILE = '.digest';
 
 /**
@@ -21,7 +24,11 @@ export async function writeCorrelationFolder(target: string, entry: CorrelationE
   await rm(target, { recursive: true, force: true });
   await mkdir(target, { recursive: true });
   const files = correlationFiles(entry, handbook);
-  await Promise.all(files.map((file) => writeFile(path.join(target, file.file), file.text, { flag: 'wx' })));
+  // The page's costly parts, built here beside the downloads (its snippets are these files), not published.
+  const texts = new Map(files.map((file) => [file.file, file.text]));
+  const snippets = Object.fromEntries(snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
+  const parts = { file: PAGE_PARTS_FILE, text: JSON.stringify(pageParts(entry, snippets)) };
+  await Promise.all([...files, parts].map((file) => writeFile(path.join(target, file.file), file.text, { flag: 'wx' })));
   // Last: a folder left half-written by a failed build has no digest and is written again.
   await writeFile(path.join(target, DIGEST_FILE), digest, { flag: 'wx' });
   return files.length;

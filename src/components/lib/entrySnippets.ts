@@ -12,6 +12,7 @@ import {
   snippetSource,
   spreadsheetSnippet,
   type HandbookIdentity,
+  type SnippetSource,
 } from '../../export/index.ts';
 import { entryRecord } from './entryRecord.ts';
 import { fitOf, type CorrelationEntry } from './entryView.ts';
@@ -32,6 +33,21 @@ export function snippetFiles(slug: string): Record<string, string> {
 }
 
 /**
+ * Every snippet of a slug without its text (cheap), in the order of entrySnippets.
+ * @example snippetKinds('water-cp')[0] // => { kind: 'python', label: 'Python', file: 'water_cp.py', contentType: 'text/x-python' }
+ */
+export function snippetKinds(slug: string): Omit<EntrySnippet, 'text'>[] {
+  const files = snippetFiles(slug);
+  return [
+    { kind: 'python', label: 'Python', file: files['python']!, contentType: 'text/x-python' },
+    { kind: 'javascript', label: 'JavaScript', file: files['javascript']!, contentType: 'text/javascript' },
+    { kind: 'typescript', label: 'TypeScript declarations', file: files['typescript']!, contentType: 'text/plain' },
+    { kind: 'c', label: 'C99', file: files['c']!, contentType: 'text/x-c' },
+    { kind: 'spreadsheet', label: 'Spreadsheet formula', file: files['spreadsheet']!, contentType: 'text/plain' },
+  ];
+}
+
+/**
  * @param handbook the handbook identity the snippets' headers carry (handbookIdentity.ts)
  * @throws Error when the entry has no fit
  */
@@ -39,12 +55,12 @@ export function entrySnippets(entry: CorrelationEntry, handbook?: HandbookIdenti
   const fit = fitOf(entry);
   if (fit === null) throw new Error(`entrySnippets requires a fit; ${entry.slug} has none`);
   const source = snippetSource(fit, entryRecord(entry, handbook), `Correlary ${version}`);
-  const files = snippetFiles(entry.slug);
-  return [
-    { kind: 'python', label: 'Python', file: files['python']!, contentType: 'text/x-python', text: pythonSnippet(source) },
-    { kind: 'javascript', label: 'JavaScript', file: files['javascript']!, contentType: 'text/javascript', text: javascriptSnippet(source) },
-    { kind: 'typescript', label: 'TypeScript declarations', file: files['typescript']!, contentType: 'text/plain', text: javascriptTypes(source) },
-    { kind: 'c', label: 'C99', file: files['c']!, contentType: 'text/x-c', text: cSnippet(source) },
-    { kind: 'spreadsheet', label: 'Spreadsheet formula', file: files['spreadsheet']!, contentType: 'text/plain', text: spreadsheetSnippet(source) },
-  ];
+  const texts: Record<string, (source: SnippetSource) => string> = {
+    python: pythonSnippet,
+    javascript: javascriptSnippet,
+    typescript: javascriptTypes,
+    c: cSnippet,
+    spreadsheet: spreadsheetSnippet,
+  };
+  return snippetKinds(entry.slug).map((kind) => ({ ...kind, text: texts[kind.kind]!(source) }));
 }

@@ -1,0 +1,40 @@
+/**
+ * What the content loader wrote for a correlation in this build. In a build, the loader writes every fitted
+ * correlation's folder into `<cache>/correlary-files/<slug>/` (src/loaders/correlationFiles.ts) before any page
+ * renders, beside the fit cache `<cache>/correlary-fits/` that the entry's stored reference names; a page reads the
+ * parts built there (src/components/lib/pageParts.ts) instead of building them a second time. Only a build may
+ * ask: `astro dev` writes no files, so a folder left by an earlier build could be stale.
+ */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import type { StoredFitReference } from '../load/storedFit.ts';
+import { correlationFilesFolder } from './correlationFilesIntegration.ts';
+
+const folders = new Map<string, string>();
+/** The last record read: a page's components ask for the same one in turn. */
+let last: { file: string; value: unknown } | undefined;
+
+/**
+ * The JSON value of `file` in the correlation's folder, or undefined when it is not there or does not parse.
+ * @param reference the entry's stored fit reference (its folder's parent is Astro's cache folder)
+ * @example writtenPageParts(entry.fit, 'water-cp', '.page.json') // => { katex: '0.16.…', … }
+ */
+export function writtenPageParts(reference: StoredFitReference, slug: string, file: string): unknown {
+  const directory = reference.fitCache.directory;
+  let folder = folders.get(directory);
+  if (folder === undefined) {
+    folder = correlationFilesFolder(pathToFileURL(`${path.dirname(path.resolve(directory))}${path.sep}`));
+    folders.set(directory, folder);
+  }
+  const full = path.join(folder, slug, file);
+  if (last?.file === full) return last.value;
+  let value: unknown;
+  try {
+    value = JSON.parse(readFileSync(full, 'utf8'));
+  } catch {
+    value = undefined;
+  }
+  last = { file: full, value };
+  return value;
+}
