@@ -63,6 +63,11 @@ describe('rational helpers', () => {
 
   it('toNumber rounds to the nearest double, like Python float(Fraction)', () => {
     const cases: [bigint, bigint][] = [[1n, 3n], [-2n, 7n], [10n ** 30n + 1n, 3n], [1n, 10n ** 320n], [123456789012345678901234567890n, 987654321n]];
+    // Numerators and denominators just below, at and above powers of two (where Number(bigint) rounds up to the power),
+    // and beyond 2^1000 (where the bit length is found in steps).
+    for (const bits of [53n, 54n, 64n, 999n, 1000n, 1001n, 1023n, 1024n, 2100n]) {
+      for (const delta of [-1n, 0n, 1n]) cases.push([(1n << bits) + delta, (1n << (bits - 40n)) + 3n], [7n ** 40n, (1n << bits) + delta]);
+    }
     const python = JSON.parse(pythonFractions(`__import__("json").dumps([float(F(${cases.map(([n, d]) => `${n},${d}`).join(')), float(F(')}))])`)) as number[];
     cases.forEach(([n, d], i) => expect(toNumber(rational(n, d))).toBe(python[i]));
   });

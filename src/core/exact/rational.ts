@@ -62,12 +62,26 @@ export function timesPowerOfTen(value: Rational, exponent: number): Rational {
     : rational(value.num, value.den * 10n ** BigInt(-exponent));
 }
 
-/** Number of binary digits of a non-negative integer (0 for 0), from its hexadecimal text: a quarter of the binary text's length to build. */
+const EXPONENT_VIEW = new DataView(new ArrayBuffer(8));
+const BIG_STEP = 1n << 1000n;
+
+/**
+ * Number of binary digits of a positive integer, without building its text: e = the binary exponent of Number(value)
+ * (read from the double's bits) is ⌊log₂ value⌋, except where Number rounds up to the power of two 2^e (value just
+ * below it), which the comparison value < 2^e detects. Values of 2^1000 or more are first shifted down in steps.
+ */
 function bitLength(value: bigint): number {
   if (value === 0n) return 0;
   if (value < 0n) return value.toString(2).length;
-  const hex = value.toString(16);
-  return (hex.length - 1) * 4 + (32 - Math.clz32(parseInt(hex[0]!, 16)));
+  let rest = value;
+  let offset = 0;
+  while (rest >= BIG_STEP) {
+    rest >>= 1000n;
+    offset += 1000;
+  }
+  EXPONENT_VIEW.setFloat64(0, Number(rest));
+  const exponent = ((EXPONENT_VIEW.getUint16(0) & 0x7ff0) >> 4) - 1023;
+  return offset + (exponent > 0 && rest < 1n << BigInt(exponent) ? exponent : exponent + 1);
 }
 
 /**
