@@ -45,10 +45,18 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   const { order, intercept, transformX, transformY, constraints, confidence, range, n, u, v, weighted, uncertaintyScale, weights, rootWeights } = solved;
   const { powers, cu, cv, map, A, solution, parameters, fittedV, residuals, weightedResiduals, centred, total, summary, dof, unscaledMapped } = solved;
   let mappedCoefficients = solved.mappedCoefficients;
-  let coefficients = mappedToPower(mappedCoefficients, map);
-  if (!intercept) coefficients[0] = 0;
   const covarianceFactor = (variance: number) => (uncertaintyScale === 'stated' ? 1 : variance);
-  let covariance = mappedCovarianceToPower(unscaledMapped.map((row) => row.map((value) => value * covarianceFactor(summary.residualVariance))), map);
+  // The floating-point power form and covariance are what is reported when exact certification is off or fails;
+  // otherwise the certified ones replace them, so they are computed only then. (mappedToPower refuses a non-finite
+  // coefficient: that refusal still comes first.)
+  const floatingCoefficients = () => {
+    const values = mappedToPower(solved.mappedCoefficients, map);
+    if (!intercept) values[0] = 0;
+    return values;
+  };
+  const floatingCovariance = () => mappedCovarianceToPower(unscaledMapped.map((row) => row.map((value) => value * covarianceFactor(summary.residualVariance))), map);
+  let coefficients: number[] | undefined = solved.mappedCoefficients.every(Number.isFinite) ? undefined : floatingCoefficients();
+  let covariance: number[][] | undefined;
   let residualStats = {
     residualSumOfSquares: summary.residualSumOfSquares,
     residualVariance: summary.residualVariance,
@@ -74,6 +82,8 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       mappedCoefficients = mappedFromPowerExact(exactCoefficients, map).map(toNumber);
     }
   }
+  coefficients ??= floatingCoefficients();
+  covariance ??= floatingCovariance();
   const mappedCovariance = unscaledMapped.map((row) => row.map((value) => value * covarianceFactor(residualStats.residualVariance)));
   const standardErrors = covariance.map((row, k) => Math.sqrt(Math.max(0, row[k]!)));
   // With σ known (χ² mode) the coefficients are normal; with σ estimated from the scatter, Student's t.
