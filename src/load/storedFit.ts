@@ -8,7 +8,7 @@
 import type { OrderSelection, PolynomialFit } from '../core/index.ts';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
 import type { DataPoint } from '../schema/index.ts';
-import { readCachedRecord, type CachedFit } from './fitCache.ts';
+import { readCachedRecord, readCachedSummary, type CachedFit } from './fitCache.ts';
 
 /** What the store keeps instead of the fit: where it is cached. */
 export interface StoredFitReference {
@@ -53,6 +53,23 @@ export function forgetStoredFits(): void {
 /** The fit behind a stored reference. @example storedFit(entry.fit).order // => 2 */
 export function storedFit(reference: StoredFitReference): PolynomialFit | undefined {
   return load(reference).fit;
+}
+
+/**
+ * The fit behind a stored reference for lists and overlays, which need neither its per-point statistics nor the
+ * other parts of the record: the kept record's fit when it is in memory, else read from the small summary file
+ * (readCachedSummary: a fifth of the record's text; `points` would be read from the record only if asked for).
+ * Not kept: a list reads each once. At N = 5000, where the records no longer all stay in memory, the catalogue
+ * and property pages thus do not read every record again.
+ * @example storedFitSummary(entry.fit)?.statistics.n // => 22
+ */
+export function storedFitSummary(reference: StoredFitReference): PolynomialFit | undefined {
+  const { directory, key } = reference.fitCache;
+  const known = kept.get(key);
+  if (known !== undefined) return known.record.fit;
+  const summary = readCachedSummary(directory, key);
+  if (summary === undefined) throw new Error(`storedFitSummary requires the cached fit ${key} in ${directory}; it is missing (was the cache folder removed during the build?)`);
+  return summary.fit;
 }
 
 /** The order selection behind a stored reference. */

@@ -7,7 +7,7 @@ import { plainSymbol, type PolynomialFit } from '../../core/index.ts';
 import { INVENTED_NOTICE } from '../../export/index.ts';
 import type { OrderSelection } from '../../core/index.ts';
 import type { CorrelationEntry, DataPoint } from '../../schema/index.ts';
-import { isStoredFitReference, storedFit, storedPoints, storedPreviews, storedSelection } from '../../load/storedFit.ts';
+import { isStoredFitReference, storedFit, storedFitSummary, storedPoints, storedPreviews, storedSelection } from '../../load/storedFit.ts';
 import { orderPreviews, type OrderPreviews } from '../../render/index.ts';
 
 export type { CorrelationEntry, DataPoint, PolynomialFit, OrderSelection, OrderPreviews };
@@ -20,6 +20,16 @@ export { INVENTED_NOTICE, plainSymbol };
 export function fitOf(entry: CorrelationEntry): PolynomialFit | null {
   if (entry.fit === null) return null;
   return isStoredFitReference(entry.fit) ? (storedFit(entry.fit) ?? null) : (entry.fit as unknown as PolynomialFit);
+}
+
+/**
+ * The entry's fit for a list or an overlay (the catalogue, the property pages): as fitOf, but read from the fit
+ * cache's summary when the record is not in memory (src/load/storedFit.ts storedFitSummary). Its per-point
+ * statistics are read only if asked for.
+ */
+export function fitSummaryOf(entry: CorrelationEntry): PolynomialFit | null {
+  if (entry.fit === null) return null;
+  return isStoredFitReference(entry.fit) ? (storedFitSummary(entry.fit) ?? null) : (entry.fit as unknown as PolynomialFit);
 }
 
 /** The entry's order selection, or null. */

@@ -8,7 +8,7 @@ import { version } from '../../../package.json';
 import { handbookJson } from '../../export/index.ts';
 import { correlationDownloads } from './correlationDownloads.ts';
 import { entryRecord } from './entryRecord.ts';
-import { fitOf, type CorrelationEntry } from './entryView.ts';
+import type { CorrelationEntry } from './entryView.ts';
 import { handbookSettings } from './handbookSettings.ts';
 
 /**
@@ -19,7 +19,7 @@ import { handbookSettings } from './handbookSettings.ts';
 export async function handbookExport(site: URL | undefined, include: (entry: CorrelationEntry) => boolean = () => true) {
   const settings = await handbookSettings();
   const base = import.meta.env.BASE_URL.replace(/\/?$/, '/');
-  const entries = (await getCollection('correlations')).map((entry) => entry.data).filter((entry) => fitOf(entry) !== null && include(entry));
+  const entries = (await getCollection('correlations')).map((entry) => entry.data).filter((entry) => entry.fit !== null && include(entry));
   entries.sort((a, b) => (a.slug < b.slug ? -1 : a.slug > b.slug ? 1 : 0));
   return handbookJson({
     generator: { name: 'correlary', version },

@@ -5,7 +5,7 @@
  * ranges overlap.
  */
 import { curveRows, overlapComparison, type CurveRow, type OverlapComparison } from '../../render/index.ts';
-import { fitOf, type CorrelationEntry } from './entryView.ts';
+import { fitSummaryOf, type CorrelationEntry } from './entryView.ts';
 import { propertyKey } from './propertyKey.ts';
 
 export interface PropertyGroup {
@@ -73,13 +73,13 @@ export function propertyGroups(entries: readonly CorrelationEntry[]): PropertyGr
 export function unitGroups(group: PropertyGroup): UnitGroup[] {
   const byUnits = new Map<string, CorrelationEntry[]>();
   for (const entry of group.entries) {
-    if (fitOf(entry) === null) continue;
+    if (entry.fit === null) continue;
     const units = `${entry.meta.property.unit}\u0000${entry.meta.variable.unit}`;
     byUnits.set(units, [...(byUnits.get(units) ?? []), entry]);
   }
   let label = 0;
   return [...byUnits.values()].map((members) => {
-    const series = members.map((entry) => ({ label: String(++label), entry, curve: curveRows(fitOf(entry)!, entry.range, SAMPLES, 5) }));
+    const series = members.map((entry) => ({ label: String(++label), entry, curve: curveRows(fitSummaryOf(entry)!, entry.range, SAMPLES, 5) }));
     const pairs: PairComparison[] = [];
     const disjoint: [PlotSeries, PlotSeries][] = [];
     for (let i = 0; i < series.length; i++) {
