@@ -228,9 +228,16 @@ export function readCachedRecord(directory: string, key: string): { record: Cach
 
 /** Store a record under `key`; written to a temporary name and renamed, so a reader never sees half a file. */
 export function writeCachedFit(directory: string, key: string, fitted: CachedFit): void {
-  mkdirSync(directory, { recursive: true });
-  // The record first: a summary is only ever found beside its record.
-  writeAtomically(fileOf(directory, key), toCacheJson(fitted));
+  const record = toCacheJson(fitted);
+  // The record first: a summary is only ever found beside its record. The folder is created when a write finds it
+  // missing (not checked before every write: a build writes many records into the same folder).
+  try {
+    writeAtomically(fileOf(directory, key), record);
+  } catch (caught) {
+    if ((caught as NodeJS.ErrnoException).code !== 'ENOENT') throw caught;
+    mkdirSync(directory, { recursive: true });
+    writeAtomically(fileOf(directory, key), record);
+  }
   writeAtomically(summaryFileOf(directory, key), toCacheJson(summaryOf(fitted)));
 }
 

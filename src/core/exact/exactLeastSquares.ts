@@ -166,8 +166,9 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
             -(powers[j]! + powers[k]!) * eu - scaledW.exponent,
           )
         : null;
-      covariance[powers[j]!]![powers[k]!] = entry ? toNumber(entry) : NaN;
-      if (j === k) standardErrors[powers[j]!] = entry ? Math.sqrt(toNumber(entry)) : NaN;
+      const value = entry ? toNumber(entry) : NaN;
+      covariance[powers[j]!]![powers[k]!] = value;
+      if (j === k) standardErrors[powers[j]!] = Math.sqrt(value);
     }
   }
   return {
