@@ -6,6 +6,7 @@
 import { fileURLToPath } from 'node:url';
 import type { AstroIntegration } from 'astro';
 import { copyCorrelationFiles } from './correlationFiles.ts';
+import { filesWritten } from './pendingFiles.ts';
 
 /** Where the loader writes the files, inside Astro's cache folder. @example correlationFilesFolder(config.cacheDir) */
 export function correlationFilesFolder(cacheDir: URL): string {
@@ -21,10 +22,18 @@ export function correlationFilesIntegration(): AstroIntegration {
       'astro:config:setup': ({ command, injectRoute }) => {
         if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('../routes/correlationFile.ts', import.meta.url)) });
       },
+      // Pages read parts the loader writes beside the downloads (src/loaders/writtenDownload.ts): the files, left
+      // being written while Astro bundles the server code, must be complete before any page renders. The server
+      // build always runs before the pages are generated; its end is the last point that holds in every build.
+      'astro:build:setup': ({ target, vite }) => {
+        if (target !== 'server') return;
+        vite.plugins = [...(vite.plugins ?? []), { name: 'correlary-files-written', closeBundle: () => filesWritten() }];
+      },
       'astro:config:done': ({ config }) => {
         folder = correlationFilesFolder(config.cacheDir);
       },
       'astro:build:done': async ({ dir, logger }) => {
+        await filesWritten(); // done since the server build ended (see astro:build:setup)
         // Hard links to the cache's files (no bytes copied); copies where the output is on another file system.
         const { copied } = await copyCorrelationFiles(folder, fileURLToPath(dir));
         if (copied > 0) logger.info(`copied ${copied} correlation files into the output (hard links were not possible there)`);

@@ -15,6 +15,7 @@ import { handbookSettingsSchema } from '../schema/index.ts';
 import { filesCodeVersion, fitCodeVersion } from '../load/fitCodeVersion.ts';
 import { writeCorrelationFiles } from './correlationFiles.ts';
 import { correlationFilesFolder } from './correlationFilesIntegration.ts';
+import { startFiles } from './pendingFiles.ts';
 import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -89,9 +90,10 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     // The handbook identity the files carry, as the pages compute it (handbookIdentity.ts) from the same settings.
     const settings = (await readHandbookSettings(displayDirectory)).settings ?? handbookSettingsSchema.parse({});
     const identity = (slug: string) => identityOf(slug, settings, context.config.base, context.config.site);
-    // Many folders to write are written in worker threads (the fits' workers have finished by now).
+    // Written (many folders in worker threads) while Astro bundles the server code; the integration waits for them
+    // before any page renders and before putting them into the output (pendingFiles.ts).
     const workers = { root, folder: fileURLToPath(new URL('correlary-worker/', context.config.cacheDir)) };
-    await writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers });
+    startFiles(writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers }));
   }
   const { readingMs, fittingMs } = handbook.timing;
   const seconds = (ms: number): string => (ms / 1000).toFixed(2);

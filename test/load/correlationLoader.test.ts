@@ -15,6 +15,7 @@ import { identityOf } from '../../src/components/lib/identityOf.ts';
 import { readHandbookSettings } from '../../src/load/index.ts';
 import { handbookSettingsSchema } from '../../src/schema/index.ts';
 import { copyCorrelationFiles, writeCorrelationFiles } from '../../src/loaders/correlationFiles.ts';
+import { filesWritten, startFiles } from '../../src/loaders/pendingFiles.ts';
 
 /** Astro's cache folder stand-in: the loader caches fits in it and the store refers to them. */
 const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-loader-cache-'));
@@ -63,6 +64,7 @@ describe('correlationLoader()', () => {
   it("a build's loader writes each correlation's downloads once; unchanged entries are not rewritten, removed ones are deleted, and the copy into the output holds them", async () => {
     const { context, entries } = fakeContext();
     await correlationLoader({ directory: 'content' }).load(context);
+    await filesWritten(); // the loader leaves the downloads being written while Astro goes on
     const folder = path.join(cacheDir, 'correlary-files');
     const stored = [...entries.values()].map((item) => item.data as CorrelationEntry).filter((entry) => entry.fit !== null);
     const slugs = stored.map((entry) => entry.slug).sort();
@@ -102,6 +104,7 @@ describe('correlationLoader()', () => {
   it('folders written by worker threads hold exactly the files written in one thread (every file, byte for byte)', async () => {
     const { context, entries } = fakeContext();
     await correlationLoader({ directory: 'content' }).load(context);
+    await filesWritten(); // the loader leaves the downloads being written while Astro goes on
     const stored = [...entries.values()].map((item) => item.data as CorrelationEntry);
     const settings = (await readHandbookSettings('content')).settings ?? handbookSettingsSchema.parse({});
     const identity = (slug: string) => identityOf(slug, settings, '/', 'https://handbook.example.org');
@@ -119,6 +122,21 @@ describe('correlationLoader()', () => {
     for (const file of listing(here)) expect(readFileSync(path.join(pooled, file)).equals(readFileSync(path.join(here, file))), file).toBe(true);
     // Unchanged: nothing to write, no worker started.
     expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 } })).toEqual({ written: 0, byWorkers: 0 });
+  });
+
+  it('filesWritten waits for the files last started and passes on their failure', async () => {
+    let finish = () => {};
+    let done = false;
+    startFiles(new Promise<void>((resolve) => (finish = resolve)).then(() => void (done = true)));
+    const waiting = filesWritten();
+    expect(done).toBe(false);
+    finish();
+    await waiting;
+    expect(done).toBe(true);
+    startFiles(Promise.reject(new Error('disk full')));
+    await expect(filesWritten()).rejects.toThrow('disk full');
+    startFiles(Promise.resolve());
+    await expect(filesWritten()).resolves.toBeUndefined();
   });
 
   it('correlationLoader fails the build on any error, logging every message', async () => {
