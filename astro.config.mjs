@@ -37,7 +37,9 @@ export default defineConfig({
   site: override('CORRELARY_SITE', siteUrlSchema) ?? settings.url,
   base: override('CORRELARY_BASE', basePathSchema) ?? settings.basePath,
   trailingSlash: 'ignore',
-  build: { format: 'directory' },
+  // Two pages in flight: one renders while the other's HTML is written (the rendering thread otherwise waits on
+  // each write; same files, N = 1000 bench: rendering 6.1 → 5.0 s back to back).
+  build: { format: 'directory', concurrency: 2 },
   // Each correlation's downloads are written once by the content loader and linked in when the build is done; the
   // content store is bundled as one JSON string rather than a large literal (src/loaders/dataStoreIntegration.ts).
   integrations: [correlationFilesIntegration(), dataStoreIntegration()],
