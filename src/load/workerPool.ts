@@ -1,5 +1,6 @@
 /**
- * A pool of worker threads running one bundled worker (src/load/workerBundle.ts), each doing one job at a time.
+ * A pool of worker threads running one bundled worker (src/load/workerBundle.ts), each given one job at a time
+ * (or a few, for jobs that wait on files).
  * Protocol: the pool posts `{ id, ...job }`; the worker answers `{ id, ...result }`, or `{ id, failure }` with a
  * message when the job failed. Jobs are handed out in the order they were asked for.
  */
@@ -15,11 +16,14 @@ export interface WorkerPool<Job extends object, Result extends object> {
 /**
  * @param bundle the worker's bundled code (workerBundle)
  * @param size how many workers (at least one)
+ * @param jobsPerWorker how many jobs each worker is given at once (default 1); more than one for jobs that wait on
+ *   files, so that one job's computing overlaps another's writing
  * @example const pool = createWorkerPool<{ n: number }, { square: number }>(bundle, 2); await pool.run({ n: 3 }) // => { square: 9 }
  */
-export function createWorkerPool<Job extends object, Result extends object>(bundle: string, size: number): WorkerPool<Job, Result> {
+export function createWorkerPool<Job extends object, Result extends object>(bundle: string, size: number, jobsPerWorker = 1): WorkerPool<Job, Result> {
   const workers = Array.from({ length: Math.max(1, size) }, () => new Worker(bundle));
-  const idle = [...workers];
+  // One entry per job a worker may take now.
+  const idle = Array.from({ length: Math.max(1, jobsPerWorker) }, () => workers).flat();
   type Waiting = { resolve: (result: Result) => void; reject: (error: Error) => void };
   const queue: ({ message: object } & Waiting)[] = [];
   const pending = new Map<number, { worker: Worker } & Waiting>();
@@ -50,7 +54,8 @@ export function createWorkerPool<Job extends object, Result extends object>(bund
         pending.delete(id);
         waiting.reject(error);
       }
-      // A worker that failed is gone: with none left, nothing queued would ever run.
+      // A worker that failed is gone: it takes no more jobs, and with none left, nothing queued would ever run.
+      for (let at = idle.length - 1; at >= 0; at--) if (idle[at] === worker) idle.splice(at, 1);
       if (--live === 0) for (const { reject } of queue.splice(0)) reject(error);
     });
   }

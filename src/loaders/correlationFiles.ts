@@ -65,7 +65,7 @@ async function filesPool(jobs: number, options: WriteFilesOptions): Promise<Work
   const size = poolSize(jobs, workers.minimumJobs);
   if (size < 1) return undefined;
   const bundle = await workerBundle(path.join(workers.root, 'src', 'loaders', 'filesWorker.ts'), 'files-worker', sourcesVersion(workers.root), workers.folder);
-  return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size);
+  return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size, 2);
 }
 
 /** Run `work` on every item, at most `limit` at a time. */
