@@ -124,7 +124,10 @@ export function printedForm(
     // The power form leaves the double range (the fit warns); there is no printed equation to check.
     return { digits: current, printed: coefficients.map((a, k) => formatCoefficient(a, current[k]!)), checkValues: [] };
   }
-  for (let pass = 0; pass < 40; pass++) {
+  // Each pass either returns or lowers one coefficient's digits by one (never below 1), so the loop ends within
+  // Σ(digits − 1) + 1 passes.
+  const passes = current.reduce((sum, d) => sum + Math.max(0, d - 1), 0) + 1;
+  for (let pass = 0; pass < passes; pass++) {
     const printed = coefficients.map((a, k) => formatCoefficient(a, current[k]!));
     const exact = printed.map((text, k) => (fixed[k] ? rational(0n) : parseDecimal(text)));
     const doubles = exact.map(toNumber);
@@ -147,5 +150,5 @@ export function printedForm(
     if (blind < 0 || current[blind]! <= 1) return { digits: current, printed, checkValues };
     current = current.map((d, k) => (k === blind ? d - 1 : d));
   }
-  throw new Error('printedForm requires digits that a check value can resolve');
+  throw new Error('printedForm: the digit-lowering loop did not end (a bug: every pass lowers a digit)');
 }

@@ -102,8 +102,9 @@ describe('printedDeviation', () => {
           { order, intercept: trial % 7 !== 3, temperatureScale: scale },
         );
       } catch (caught) {
-        // A few extreme random tables are refused by the fit itself (not by the display rule); the calls made
-        // before that are compared all the same.
+        // None may be refused: three of these tables (noise at the last digits of an order-8 form) made printedForm
+        // give up after a fixed 40 passes of lowering digits, which failed the whole fit; the loop now runs until
+        // it ends, which it always does (each pass lowers a digit).
         failed.push(`${trial}: ${caught instanceof Error ? caught.message : String(caught)}`);
         continue;
       }
@@ -115,7 +116,7 @@ describe('printedDeviation', () => {
       }
     }
     expect(expectEveryCallExact(from)).toBeGreaterThanOrEqual(3 * fitted);
-    expect(fitted, failed.join('\n')).toBeGreaterThan(140);
+    expect(fitted, failed.join("\n")).toBe(150);
     // Both outcomes occur (so both sides of the 1 % limit were compared). Counted by the test itself.
     expect(shown).toBeGreaterThan(20);
     expect(refused).toBeGreaterThan(15);
