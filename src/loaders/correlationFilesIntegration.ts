@@ -6,7 +6,7 @@
 import { fileURLToPath } from 'node:url';
 import type { AstroIntegration } from 'astro';
 import { copyCorrelationFiles } from './correlationFiles.ts';
-import { filesWritten } from './pendingFiles.ts';
+import { beginFiles, filesWritten } from './pendingFiles.ts';
 
 /** Where the loader writes the files, inside Astro's cache folder. @example correlationFilesFolder(config.cacheDir) */
 export function correlationFilesFolder(cacheDir: URL): string {
@@ -25,6 +25,11 @@ export function correlationFilesIntegration(): AstroIntegration {
       // Pages read parts the loader writes beside the downloads (src/loaders/writtenDownload.ts): the files, left
       // being written while Astro bundles the server code, must be complete before any page renders. The server
       // build always runs before the pages are generated; its end is the last point that holds in every build.
+      // The downloads the loader prepared start being written once Astro has synced the content and saved its store
+      // (see pendingFiles.ts): the build starts after that.
+      'astro:build:start': () => {
+        beginFiles();
+      },
       'astro:build:setup': ({ target, vite }) => {
         if (target !== 'server') return;
         vite.plugins = [...(vite.plugins ?? []), { name: 'correlary-files-written', closeBundle: () => filesWritten() }];

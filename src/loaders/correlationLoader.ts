@@ -15,7 +15,7 @@ import { handbookSettingsSchema } from '../schema/index.ts';
 import { filesCodeVersion, fitCodeVersion } from '../load/fitCodeVersion.ts';
 import { writeCorrelationFiles } from './correlationFiles.ts';
 import { correlationFilesFolder } from './correlationFilesIntegration.ts';
-import { startFiles } from './pendingFiles.ts';
+import { deferFiles } from './pendingFiles.ts';
 import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -90,15 +90,17 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     // The handbook identity the files carry, as the pages compute it (handbookIdentity.ts) from the same settings.
     const settings = (await readHandbookSettings(displayDirectory)).settings ?? handbookSettingsSchema.parse({});
     const identity = (slug: string) => identityOf(slug, settings, context.config.base, context.config.site);
-    // Written (many folders in worker threads) while Astro bundles the server code; the integration waits for them
-    // before any page renders and before putting them into the output (pendingFiles.ts).
+    // Written (many folders in worker threads) while Astro bundles the server code: started when the build starts,
+    // after Astro has saved its content store; the integration waits for them before any page renders and before
+    // putting them into the output (pendingFiles.ts says why not at once).
     const workers = { root, folder: fileURLToPath(new URL('correlary-worker/', context.config.cacheDir)) };
-    startFiles(writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers }));
+    deferFiles(() => writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers }));
   }
-  const { readingMs, fittingMs } = handbook.timing;
-  const seconds = (ms: number): string => (ms / 1000).toFixed(2);
+  const { readingMs, fittingMs, refittingMs } = handbook.timing;
+  const seconds = (ms: number, digits = 2): string => (ms / 1000).toFixed(digits);
+  // "of which fitting what was not cached": the fits themselves, without the cache keys, look-ups and review trails.
   context.logger.info(
-    `loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory} in ${seconds(readingMs + fittingMs)} s (fitting ${seconds(fittingMs)} s, ${handbook.cachedFits} from the fit cache)`,
+    `loaded ${entries.length} correlation${entries.length === 1 ? '' : 's'} from ${displayDirectory} in ${seconds(readingMs + fittingMs)} s (fitting ${seconds(fittingMs)} s, ${handbook.cachedFits} from the fit cache; fitting what was not cached ${seconds(refittingMs, 3)} s)`,
   );
 }
 

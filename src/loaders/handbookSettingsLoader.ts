@@ -27,9 +27,13 @@ async function loadSettings(context: LoaderContext, absoluteDirectory: string): 
     const errors = result.diagnostics.filter((problem) => problem.severity === 'error').length;
     throw new Error(`${errors} problem${errors === 1 ? '' : 's'} in ${result.file}; run 'npx correlary check ${displayDirectory}' for the list`);
   }
-  context.store.clear();
   const data = await context.parseData({ id: HANDBOOK_SETTINGS_ID, data: { ...result.settings } });
-  context.store.set({ id: HANDBOOK_SETTINGS_ID, data, digest: context.generateDigest(data) });
+  const digest = context.generateDigest(data);
+  // Unchanged settings leave the store untouched: a change would make Astro save its whole store (every
+  // correlation) early in the build, while the correlations are still being read (see src/loaders/pendingFiles.ts).
+  if (context.store.get(HANDBOOK_SETTINGS_ID)?.digest === digest && context.store.keys().length === 1) return;
+  context.store.clear();
+  context.store.set({ id: HANDBOOK_SETTINGS_ID, data, digest });
 }
 
 /** The settings loader: `defineCollection({ loader: handbookSettingsLoader(), schema: handbookSettingsSchema })`. */

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { correlationFilesIntegration } from '../../src/loaders/correlationFilesIntegration.ts';
-import { startFiles } from '../../src/loaders/pendingFiles.ts';
+import { deferFiles, filesWritten, startFiles } from '../../src/loaders/pendingFiles.ts';
 
 type Plugin = { name: string; closeBundle: () => Promise<void> };
 type Setup = (options: { target: 'server' | 'client'; vite: { plugins?: Plugin[] } }) => void;
@@ -32,5 +32,29 @@ describe('correlationFilesIntegration()', () => {
     startFiles(Promise.reject(new Error('disk full')));
     await expect(server.plugins![0]!.closeBundle()).rejects.toThrow('disk full');
     startFiles(Promise.resolve());
+  });
+
+  it('the files the loader prepared start only when the build starts, after Astro has saved its content store', async () => {
+    // Astro 5.18 loses a store save asked for while an earlier save is still being written (pendingFiles.ts); the
+    // downloads' thousands of file operations must not be queued before the store is saved, so they wait for the
+    // build to start (astro/dist/core/build/index.js runs astro:build:start after syncing the content).
+    const start = (correlationFilesIntegration().hooks as unknown as { 'astro:build:start': () => void })['astro:build:start'];
+    let started = 0;
+    deferFiles(async () => {
+      started++;
+    });
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    expect(started).toBe(0);
+    start();
+    expect(started).toBe(1);
+    await filesWritten();
+    start(); // once only
+    expect(started).toBe(1);
+    // Without the hook (a test, or a tool that renders without Astro's build), waiting for the files starts them.
+    deferFiles(async () => {
+      started++;
+    });
+    await filesWritten();
+    expect(started).toBe(2);
   });
 });
