@@ -13,15 +13,11 @@ import { fileURLToPath } from 'node:url';
 import { makeBareProject, makeSiteProject } from './build/benchProjects.ts';
 import { runMeasured, type MeasuredRun } from './build/runMeasured.ts';
 import { writeSyntheticHandbook } from './build/syntheticHandbook.ts';
+import { benchOption } from './options.ts';
 
 const repository = fileURLToPath(new URL('../..', import.meta.url));
 const argv = process.argv.slice(2);
-function option(name: string, fallback: string): string {
-  const at = argv.findIndex((arg) => arg === `--${name}` || arg.startsWith(`--${name}=`));
-  if (at < 0) return fallback;
-  const arg = argv[at]!;
-  return arg.includes('=') ? arg.slice(arg.indexOf('=') + 1) : (argv[at + 1] ?? fallback);
-}
+const option = (name: string, fallback: string): string => benchOption(argv, name, fallback);
 const count = Number(option('count', '100'));
 const seed = Number(option('seed', '1'));
 const keep = argv.includes('--keep');

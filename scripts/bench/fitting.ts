@@ -17,15 +17,11 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { writeSyntheticHandbook } from './build/syntheticHandbook.ts';
+import { benchOption } from './options.ts';
 
 const repository = fileURLToPath(new URL('../..', import.meta.url));
 const argv = process.argv.slice(2);
-function option(name: string, fallback: string): string {
-  const at = argv.findIndex((arg) => arg === `--${name}` || arg.startsWith(`--${name}=`));
-  if (at < 0) return fallback;
-  const arg = argv[at]!;
-  return arg.includes('=') ? arg.slice(arg.indexOf('=') + 1) : (argv[at + 1] ?? fallback);
-}
+const option = (name: string, fallback: string): string => benchOption(argv, name, fallback);
 const count = Number(option('count', '1000'));
 const seed = Number(option('seed', '1'));
 const passes = Number(option('passes', '2'));
