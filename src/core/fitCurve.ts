@@ -15,19 +15,51 @@ import type { CurveFit, FitData, FitOptions } from './types.ts';
 
 export function fitCurve(data: FitData, options: FitOptions): CurveFit {
   const solved = solveFit(data, options);
-  const { order, transformX, transformY, confidence, range, weighted, uncertaintyScale, weights, map, fittedV, summary, dof, unscaledMapped } = solved;
-  const factor = uncertaintyScale === 'stated' ? 1 : summary.residualVariance;
-  return {
-    order,
-    transformX,
-    transformY,
-    range,
-    confidence,
-    uncertaintyScale,
+  const { weighted, weights, summary } = solved;
+  return curveFitOf(data, options, {
+    ...solved,
     uncertaintyProfile: weighted ? uncertaintyProfile(data.x, weights.map((w) => 1 / Math.sqrt(w))) : null,
-    uncertaintyModel: weighted && options.uncertaintyModel ? { relative: options.uncertaintyModel.relative } : null,
-    mapped: { map, coefficients: solved.mappedCoefficients, covariance: unscaledMapped.map((row) => row.map((value) => value * factor)) },
-    statistics: { residualStdDev: summary.residualStdDev, degreesOfFreedom: dof },
-    residualsOriginal: data.y.map((y, i) => y - inverseY(transformY, fittedV[i]!)),
+    residualVariance: summary.residualVariance,
+  });
+}
+
+/** The parts of a solved fit that a CurveFit is made of (solveFit's, or fitCurves' from a shared factorisation). */
+export interface CurveParts {
+  readonly order: number;
+  readonly transformX: CurveFit['transformX'];
+  readonly transformY: CurveFit['transformY'];
+  readonly range: CurveFit['range'];
+  readonly confidence: number;
+  readonly uncertaintyScale: 'stated' | 'scatter';
+  readonly uncertaintyProfile: CurveFit['uncertaintyProfile'];
+  readonly weighted: boolean;
+  readonly map: CurveFit['mapped']['map'];
+  readonly mappedCoefficients: readonly number[];
+  /** Unscaled covariance of the mapped coefficients (times s², or 1 with stated uncertainties). */
+  readonly unscaledMapped: readonly (readonly number[])[];
+  readonly residualVariance: number;
+  readonly dof: number;
+  /** Fitted values in the fitted (transformed) space, one per point. */
+  readonly fittedV: readonly number[];
+}
+
+/**
+ * fitCurve's result from its parts (also fitCurves', which must give the same numbers).
+ * @example curveFitOf(data, options, parts).statistics.residualStdDev // => √(residual variance)
+ */
+export function curveFitOf(data: FitData, options: Pick<FitOptions, 'uncertaintyModel'>, parts: CurveParts): CurveFit {
+  const factor = parts.uncertaintyScale === 'stated' ? 1 : parts.residualVariance;
+  return {
+    order: parts.order,
+    transformX: parts.transformX,
+    transformY: parts.transformY,
+    range: parts.range,
+    confidence: parts.confidence,
+    uncertaintyScale: parts.uncertaintyScale,
+    uncertaintyProfile: parts.uncertaintyProfile,
+    uncertaintyModel: parts.weighted && options.uncertaintyModel ? { relative: options.uncertaintyModel.relative } : null,
+    mapped: { map: parts.map, coefficients: [...parts.mappedCoefficients], covariance: parts.unscaledMapped.map((row) => row.map((value) => value * factor)) },
+    statistics: { residualStdDev: Math.sqrt(parts.residualVariance), degreesOfFreedom: parts.dof },
+    residualsOriginal: data.y.map((y, i) => y - inverseY(parts.transformY, parts.fittedV[i]!)),
   };
 }

@@ -23,9 +23,9 @@
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
 import { designMatrix } from './designMatrix.ts';
 import { domainMapFor, toUnit } from './domain.ts';
-import { fitCurve } from './fitCurve.ts';
+import { curveFitOf, fitCurve } from './fitCurve.ts';
 import { uncertaintyProfile } from './stats/localUncertainty.ts';
-import { fittedSpaceWeights, inverseY, transformData } from './transforms.ts';
+import { fittedSpaceWeights, transformData } from './transforms.ts';
 import { validateFitInput, type ValidatedOptions } from './validateFitInput.ts';
 import type { CurveFit, FitData, FitOptions } from './types.ts';
 
@@ -173,20 +173,9 @@ export function fitCurves(data: FitData, options: Omit<FitOptions, 'order'>, ord
         unscaledMapped[power]![other] = unscaledZ[j]![i]!;
       });
     });
-    // fitCurve's result.
-    const factor = uncertaintyScale === 'stated' ? 1 : residualVariance;
-    return {
-      order,
-      transformX,
-      transformY,
-      range,
-      confidence,
-      uncertaintyScale,
-      uncertaintyProfile: profile,
-      uncertaintyModel: weighted && options.uncertaintyModel ? { relative: options.uncertaintyModel.relative } : null,
-      mapped: { map, coefficients: mappedCoefficients, covariance: unscaledMapped.map((row) => row.map((value) => value * factor)) },
-      statistics: { residualStdDev: Math.sqrt(residualVariance), degreesOfFreedom: dof },
-      residualsOriginal: data.y.map((y, i) => y - inverseY(transformY, fittedV[i]!)),
-    };
+    return curveFitOf(data, options, {
+      order, transformX, transformY, range, confidence, uncertaintyScale, uncertaintyProfile: profile, weighted, map,
+      mappedCoefficients, unscaledMapped, residualVariance, dof, fittedV,
+    });
   });
 }
