@@ -53,19 +53,40 @@ export function fitCodeVersion(packageRoot: string): string {
 }
 
 /**
- * A version of the code that turns cached fits into published files (src/components/lib, src/export, src/render
- * and what fitCodeVersion covers): SHA-256 of `fitVersion` and of those source files, so that files written by an
+ * A version of the code that turns cached fits into published files (src/components/lib, src/export, src/render,
+ * src/loaders/correlationFolder.ts and what fitCodeVersion covers): SHA-256 of `fitVersion` and of those source files, so that files written by an
  * older code are rewritten. Where the sources are not present, `fitVersion` alone.
  * @example filesCodeVersion('.', fitCodeVersion('.')).length // => 64
  */
 export function filesCodeVersion(packageRoot: string, fitVersion: string): string {
   const hash = createHash('sha256').update(fitVersion);
-  const files = ['components/lib', 'export', 'render'].flatMap((folder) => sourceFiles(path.join(packageRoot, 'src', folder)));
+  const files = [
+    ...['components/lib', 'export', 'render'].flatMap((folder) => sourceFiles(path.join(packageRoot, 'src', folder))),
+    // what decides which files a folder holds and what goes into its page parts
+    path.join(packageRoot, 'src', 'loaders', 'correlationFolder.ts'),
+  ];
   for (const file of files) {
     try {
       hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');
     } catch {
       // not shipped: the fitting code's version stands for it
+    }
+  }
+  return hash.digest('hex');
+}
+
+/**
+ * A version of every script source under `<packageRoot>/src` and of package.json: names a worker's bundle, which
+ * may be made of any of them. Where the sources are not present, package.json alone.
+ * @example sourcesVersion('.').length // => 64
+ */
+export function sourcesVersion(packageRoot: string): string {
+  const hash = createHash('sha256');
+  for (const file of [path.join(packageRoot, 'package.json'), ...sourceFiles(path.join(packageRoot, 'src'))]) {
+    try {
+      hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');
+    } catch {
+      // not shipped
     }
   }
   return hash.digest('hex');

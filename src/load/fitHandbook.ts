@@ -93,7 +93,7 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
   const cachedFits = prepared.filter((item) => item.fitted !== undefined).length;
   const missing = prepared.filter((item) => item.correlation !== undefined && item.fitted === undefined);
   const refitStarted = performance.now();
-  const pool = cache !== undefined && options.workers !== undefined ? await createFitPool(options.workers.root, cache.version, path.join(cache.directory, '..', 'correlary-worker'), poolSize(missing.length, options.workers.minimumJobs)) : undefined;
+  const pool = cache !== undefined && options.workers !== undefined ? await createFitPool(options.workers.root, path.join(cache.directory, '..', 'correlary-worker'), poolSize(missing.length, options.workers.minimumJobs)) : undefined;
   try {
     await Promise.all(
       missing.map(async (item) => {

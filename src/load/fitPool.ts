@@ -1,6 +1,6 @@
 /**
  * Worker threads that fit correlations in parallel for fitHandbook when many are not in the fit cache. The worker
- * (src/load/fitWorker.ts) is bundled once per fitting-code version with esbuild (present wherever Astro is, through
+ * (src/load/fitWorker.ts) is bundled once per version of the sources (sourcesVersion) with esbuild (present wherever Astro is, through
  * Vite) into a folder beside the fit cache, so it runs the same way from the TypeScript sources and from an
  * installed package. When the bundle cannot be made (no esbuild, no sources), there is no pool and fitHandbook fits
  * in its own thread; the results are the same either way (the same code fits each dataset; only where it runs
@@ -10,6 +10,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { DatasetFit } from './fitDataset.ts';
 import type { LoadedCorrelation } from './types.ts';
+import { sourcesVersion } from './fitCodeVersion.ts';
 import { workerBundle } from './workerBundle.ts';
 import { createWorkerPool } from './workerPool.ts';
 
@@ -33,13 +34,14 @@ export function poolSize(jobs: number, minimum = POOL_MINIMUM_JOBS): number {
 /**
  * A pool of `size` workers, or undefined when none can be started (then the caller fits in its own thread).
  * @param root the package root holding src/load/fitWorker.ts
- * @param version the fitting code's version (fitCodeVersion), naming the bundle
  * @param folder where the bundle is kept
- * @example const pool = await createFitPool(root, version, folder, 2); await pool?.fit(correlation, dir, key)
+ * @example const pool = await createFitPool(root, folder, 2); await pool?.fit(correlation, dir, key)
  */
-export async function createFitPool(root: string, version: string, folder: string, size: number): Promise<FitPool | undefined> {
+export async function createFitPool(root: string, folder: string, size: number): Promise<FitPool | undefined> {
   if (size < 1) return undefined;
-  const bundle = await workerBundle(path.join(root, 'src', 'load', 'fitWorker.ts'), 'fit-worker', version, folder);
+  // Named by every source it may be made of (sourcesVersion), not only by the fitting code's version: the bundle
+  // also holds e.g. the message helpers fitDataset uses.
+  const bundle = await workerBundle(path.join(root, 'src', 'load', 'fitWorker.ts'), 'fit-worker', sourcesVersion(root), folder);
   if (bundle === undefined) return undefined;
   // The worker's protocol (src/load/fitWorker.ts): { id, correlation, directory, key } in, { id, fitted } out.
   const pool = createWorkerPool<{ correlation: LoadedCorrelation; directory: string; key: string }, { fitted: DatasetFit }>(bundle, size);

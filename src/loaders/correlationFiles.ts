@@ -12,10 +12,10 @@
  * file linked into an earlier build's output keeps its bytes.
  */
 import { createHash } from 'node:crypto';
-import { readFileSync, readdirSync } from 'node:fs';
 import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { toCacheJson } from '../load/fitCache.ts';
+import { sourcesVersion } from '../load/fitCodeVersion.ts';
 import { poolSize } from '../load/fitPool.ts';
 import { forgetStoredFits } from '../load/storedFit.ts';
 import { workerBundle } from '../load/workerBundle.ts';
@@ -38,25 +38,6 @@ export interface WriteFilesOptions {
 }
 
 type FolderJob = { target: string; entry: CorrelationEntry; handbook: HandbookIdentity; digest: string };
-
-/** A hex digest of every source file under `<root>/src` (what the files worker's bundle can be made of). */
-function sourcesVersion(root: string): string {
-  const hash = createHash('sha256');
-  const walk = (folder: string): void => {
-    for (const item of readdirSync(folder, { withFileTypes: true }).sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0))) {
-      const full = path.join(folder, item.name);
-      if (item.isDirectory()) walk(full);
-      else hash.update(path.relative(root, full)).update('\0').update(readFileSync(full)).update('\0');
-    }
-  };
-  try {
-    hash.update(readFileSync(path.join(root, 'package.json')));
-    walk(path.join(root, 'src'));
-  } catch {
-    // no sources: no worker bundle either (workerBundle finds no entry)
-  }
-  return hash.digest('hex');
-}
 
 /** A pool of files workers for `jobs` folders to write, or undefined (then they are written in this thread). */
 async function filesPool(jobs: number, options: WriteFilesOptions): Promise<WorkerPool<FolderJob, { files: number }> | undefined> {
