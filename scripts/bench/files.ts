@@ -1,0 +1,221 @@
+/**
+ * bench:files — the CPU time of building one correlation's folder as a files worker does it
+ * (src/loaders/correlationFolder.ts writeCorrelationFolder, src/loaders/filesWorker.ts): correlationFiles (the
+ * downloads), then pageParts (the page's costly parts, from the snippets just built), then forgetStoredFits, for
+ * every correlation of the seeded synthetic handbook of bench:build, in this one thread, without Astro and
+ * without writing the files. The handbook is fitted once first (in this thread, with a fit cache, as the build
+ * does), and each stored entry is made as the content loader makes it (src/loaders/correlationLoader.ts: the fit,
+ * order selection and points are references to the fit cache; parsed by the collection's schema; cloned as a
+ * worker receives it). Prints wall time per phase and CPU time (process.cpuUsage) per pass and per correlation;
+ * nothing here asserts a time.
+ *
+ * With `--baseline DIR` (another checkout's root, e.g. `git archive main src package.json | tar -x -C DIR` with
+ * node_modules linked) every folder is also built by that checkout's code, passes alternating, so before and after
+ * are measured in the same run under the same load; every file of every folder (the page parts as the JSON text
+ * written) is compared between the two and the number of identical files is printed.
+ *
+ * Run: npm run bench:files -- [--count 1000] [--seed 1] [--passes 3] [--baseline DIR] [--only current|baseline]
+ * A V8 profile: node --cpu-prof --cpu-prof-dir=DIR --import tsx scripts/bench/files.ts --count 1000 --passes 1
+ */
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { writeSyntheticHandbook } from './build/syntheticHandbook.ts';
+import { benchOption } from './options.ts';
+import type { CorrelationEntry, StoredHistory } from '../../src/schema/index.ts';
+import type { HandbookIdentity } from '../../src/export/index.ts';
+
+const repository = fileURLToPath(new URL('../..', import.meta.url));
+const argv = process.argv.slice(2);
+const option = (name: string, fallback: string): string => benchOption(argv, name, fallback);
+const count = Number(option('count', '1000'));
+const seed = Number(option('seed', '1'));
+const passes = Number(option('passes', '3'));
+const baselineRoot = option('baseline', '');
+const only = option('only', '');
+if (!Number.isInteger(count) || count < 1) throw new Error(`bench:files requires --count to be a positive whole number; got ${option('count', '')}`);
+if (!Number.isInteger(passes) || passes < 1) throw new Error(`bench:files requires --passes to be a positive whole number; got ${option('passes', '')}`);
+
+interface File {
+  readonly file: string;
+  readonly text: string;
+}
+interface Code {
+  readonly name: string;
+  readonly correlationFiles: (entry: CorrelationEntry, handbook: HandbookIdentity) => File[];
+  readonly pageParts: (entry: CorrelationEntry, snippets: Readonly<Record<string, string>>) => unknown;
+  readonly snippetKinds: (slug: string) => readonly { kind: string; file: string }[];
+  readonly pagePartsFile: string;
+  readonly forgetStoredFits: () => void;
+}
+
+async function load(name: string, root: string): Promise<Code> {
+  const at = (...parts: string[]) => pathToFileURL(path.join(root, 'src', ...parts)).href;
+  const [files, parts, snippets, stored] = await Promise.all([
+    import(at('components', 'lib', 'correlationFiles.ts')),
+    import(at('components', 'lib', 'pageParts.ts')),
+    import(at('components', 'lib', 'entrySnippets.ts')),
+    import(at('load', 'storedFit.ts')),
+  ]);
+  return {
+    name,
+    correlationFiles: files.correlationFiles,
+    pageParts: parts.pageParts,
+    snippetKinds: snippets.snippetKinds,
+    pagePartsFile: parts.PAGE_PARTS_FILE,
+    forgetStoredFits: stored.forgetStoredFits,
+  };
+}
+
+/** One folder's files, as writeCorrelationFolder (src/loaders/correlationFolder.ts) computes them; CPU-timed phases. */
+function folder(code: Code, entry: CorrelationEntry, handbook: HandbookIdentity, figures: Figures): File[] {
+  const a = performance.now();
+  const files = code.correlationFiles(entry, handbook);
+  const b = performance.now();
+  const texts = new Map(files.map((file) => [file.file, file.text]));
+  const snippets = Object.fromEntries(code.snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
+  const parts = { file: code.pagePartsFile, text: JSON.stringify(code.pageParts(entry, snippets)) };
+  const c = performance.now();
+  // As the files worker does after each folder: the fit records read are not kept.
+  code.forgetStoredFits();
+  figures.files += b - a;
+  figures.parts += c - b;
+  return [...files, parts];
+}
+
+interface Figures {
+  files: number;
+  parts: number;
+  cpu: number;
+  wall: number;
+}
+
+const cpuMs = () => {
+  const usage = process.cpuUsage();
+  return (usage.user + usage.system) / 1000;
+};
+
+interface Job {
+  readonly entry: CorrelationEntry;
+  readonly handbook: HandbookIdentity;
+}
+
+/** One pass over every folder: wall ms per phase, and CPU and wall ms of the pass. */
+function pass(code: Code, jobs: readonly Job[], kept?: File[][]): Figures {
+  const figures: Figures = { files: 0, parts: 0, cpu: 0, wall: 0 };
+  const wallStart = performance.now();
+  const cpuStart = cpuMs();
+  jobs.forEach(({ entry, handbook }, i) => {
+    const files = folder(code, entry, handbook, figures);
+    if (kept) kept[i] = files;
+  });
+  figures.cpu = cpuMs() - cpuStart;
+  figures.wall = performance.now() - wallStart;
+  return figures;
+}
+
+/** The stored entries of the handbook, made as src/loaders/correlationLoader.ts makes them, with their identities. */
+async function storedJobs(content: string, cacheDirectory: string): Promise<Job[]> {
+  const src = (...parts: string[]) => pathToFileURL(path.join(repository, 'src', ...parts)).href;
+  const { fitHandbook, handbookHistory, readHandbookSettings } = (await import(src('load', 'index.ts'))) as typeof import('../../src/load/index.ts');
+  const { fitCodeVersion } = (await import(src('load', 'fitCodeVersion.ts'))) as typeof import('../../src/load/fitCodeVersion.ts');
+  const { correlationEntrySchema, handbookSettingsSchema } = (await import(src('schema', 'index.ts'))) as typeof import('../../src/schema/index.ts');
+  const { identityOf } = (await import(src('components', 'lib', 'identityOf.ts'))) as typeof import('../../src/components/lib/identityOf.ts');
+  const fitCache = { directory: cacheDirectory, version: fitCodeVersion(repository) };
+  const handbook = await fitHandbook(content, { fitCache });
+  const histories = await handbookHistory(content, handbook.datasets);
+  // The site address and base path of astro.config.mjs: the settings' (bench:build sets no override).
+  const settings = (await readHandbookSettings(content)).settings ?? handbookSettingsSchema.parse({});
+  const jobs: Job[] = [];
+  for (const { dataset, fitted, review } of handbook.datasets) {
+    const correlation = dataset.correlation;
+    if (correlation === undefined || fitted === undefined || review === undefined) continue;
+    const reference = fitted.cacheKey === undefined ? undefined : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } };
+    const entry = {
+      slug: correlation.slug,
+      meta: correlation.meta,
+      points: reference ?? [...correlation.points],
+      excluded: [...correlation.excluded],
+      dataRange: correlation.dataRange,
+      range: correlation.range,
+      warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
+      fit: fitted.fit === undefined || reference === undefined ? null : reference,
+      orderSelection: fitted.selection === undefined || reference === undefined ? null : reference,
+      reviewTrail: {
+        fingerprint: review.fingerprint?.text ?? null,
+        approval: review.approval.state,
+        lapseReasons: review.approval.state === 'lapsed' ? [...review.approval.reasons] : [],
+      },
+      history: histories.get(correlation.slug) as StoredHistory | undefined,
+    };
+    // context.parseData validates it by the collection's schema; the worker gets a structured clone.
+    const stored = structuredClone(correlationEntrySchema.parse(entry));
+    if (stored.fit === null) continue; // writeCorrelationFiles writes folders of fitted entries only
+    jobs.push({ entry: stored, handbook: identityOf(stored.slug, settings, settings.basePath, settings.url) });
+  }
+  // The files workers are given the folders in slug order.
+  return jobs.sort((a, b) => (a.entry.slug < b.entry.slug ? -1 : 1));
+}
+
+const seconds = (ms: number) => (ms / 1000).toFixed(2);
+
+async function main(): Promise<void> {
+  const work = await mkdtemp(path.join(tmpdir(), 'correlary-bench-files-'));
+  try {
+    const content = path.join(work, 'content');
+    await writeSyntheticHandbook(content, { count, seed });
+    const fitStarted = performance.now();
+    const jobs = await storedJobs(content, path.join(work, 'correlary-fits'));
+    const fitSeconds = (performance.now() - fitStarted) / 1000;
+    const codes: Code[] = [];
+    if (baselineRoot !== '' && only !== 'current') codes.push(await load('baseline', path.resolve(baselineRoot)));
+    if (only !== 'baseline') codes.push(await load('current', repository));
+    console.log(`bench:files: ${jobs.length} folders of synthetic correlations (seed ${seed}; fitted in ${fitSeconds.toFixed(1)} s), one thread, node ${process.version}`);
+
+    // Warm-up on a slice of the folders, then keep the files of every folder (first pass) to compare them.
+    for (const code of codes) pass(code, jobs.slice(0, Math.min(50, jobs.length)));
+    const folders = new Map<string, File[][]>();
+    const results = new Map<string, Figures[]>(codes.map((code) => [code.name, []]));
+    for (let round = 0; round < passes; round++) {
+      for (const code of round % 2 === 0 ? codes : [...codes].reverse()) {
+        const kept: File[][] | undefined = round === 0 && codes.length > 1 ? [] : undefined;
+        results.get(code.name)!.push(pass(code, jobs, kept));
+        if (kept) folders.set(code.name, kept);
+      }
+    }
+    console.log('| code | pass | correlationFiles s | pageParts s | pass CPU s | pass wall s | CPU ms per correlation |');
+    console.log('|---|---:|---:|---:|---:|---:|---:|');
+    for (const [name, list] of results) {
+      list.forEach((figures, i) => {
+        console.log(`| ${name} | ${i + 1} | ${seconds(figures.files)} | ${seconds(figures.parts)} | ${seconds(figures.cpu)} | ${seconds(figures.wall)} | ${(figures.cpu / jobs.length).toFixed(2)} |`);
+      });
+    }
+    if (results.has('baseline') && results.has('current')) {
+      const best = (name: string) => Math.min(...results.get(name)!.map((figures) => figures.cpu));
+      console.log(`CPU ms per correlation (best pass of each): baseline ${(best('baseline') / jobs.length).toFixed(2)}, current ${(best('current') / jobs.length).toFixed(2)}`);
+      console.log(`current/baseline CPU ratio (best pass of each): ${(best('current') / best('baseline')).toFixed(3)}`);
+      const before = folders.get('baseline')!;
+      const after = folders.get('current')!;
+      let total = 0;
+      let identical = 0;
+      const differing = new Map<string, number>();
+      before.forEach((files, i) => {
+        const theirs = new Map(after[i]!.map((file) => [file.file, file.text]));
+        const names = new Set([...files.map((file) => file.file), ...theirs.keys()]);
+        for (const name of names) {
+          total++;
+          const mine = files.find((file) => file.file === name)?.text;
+          if (mine !== undefined && mine === theirs.get(name)) identical++;
+          else differing.set(name, (differing.get(name) ?? 0) + 1);
+        }
+      });
+      console.log(`files identical to the baseline's: ${identical} of ${total}`);
+      if (differing.size > 0) console.log(`differing, by file name: ${[...differing].map(([name, n]) => `${name} ${n}`).join(', ')}`);
+    }
+  } finally {
+    await rm(work, { recursive: true, force: true });
+  }
+}
+
+await main();
