@@ -21,7 +21,7 @@
  */
 import { decimalRational, parseDecimal } from './exact/decimal.ts';
 import { evaluateExact } from './exact/evaluateExact.ts';
-import { add, divide, rational, timesPowerOfTen, toNumber, type Rational } from './exact/rational.ts';
+import { add, divide, multiply, rational, timesPowerOfTen, toNumber, type Rational } from './exact/rational.ts';
 import { formatCoefficient } from './format/formatCoefficient.ts';
 import { roundSignificant } from './format/roundSignificant.ts';
 import type { CheckValue, PrintedCheckValue, TransformX, TransformY } from './types.ts';
@@ -132,19 +132,23 @@ export function printedForm(
     const exact = printed.map((text, k) => (fixed[k] ? rational(0n) : parseDecimal(text)));
     const doubles = exact.map(toNumber);
     const us = xs.map((x) => exactU(transformX, x));
+    const values = us.map((u) => evaluateExact(exact, u));
     const checkValues = xs.map((x, i) => {
-      const y = yOf(transformY, evaluateExact(exact, us[i]!));
+      const y = yOf(transformY, values[i]!);
       const { text, tolerance } = printedValue(y, copyNoise(doubles, transformX, transformY, x, y));
       return { x, y: text, tolerance };
     });
     // A copy error in coefficient k (±1 in its last printed digit) must move some check value by more than
-    // two units of its last digit (then it lies more than one unit away even after rounding and noise).
+    // two units of its last digit (then it lies more than one unit away even after rounding and noise). The changed
+    // polynomial's value at u is the printed one's plus δ·u^k, exactly (no need to evaluate it afresh).
     const blind = exact.findIndex((value, k) => {
       if (fixed[k] || value.num === 0n) return false;
       const step = timesPowerOfTen(rational(1n), lastPrintedPlace(printed[k]!));
       return [step, rational(-step.num, step.den)].some((delta) => {
-        const changed = exact.map((entry, j) => (j === k ? add(entry, delta) : entry));
-        return !xs.some((_, i) => Math.abs(yOf(transformY, evaluateExact(changed, us[i]!)) - Number(checkValues[i]!.y)) > 2 * checkValues[i]!.tolerance);
+        return !xs.some((_, i) => {
+          const changed = add(values[i]!, multiply(delta, rational(us[i]!.num ** BigInt(k), us[i]!.den ** BigInt(k))));
+          return Math.abs(yOf(transformY, changed) - Number(checkValues[i]!.y)) > 2 * checkValues[i]!.tolerance;
+        });
       });
     });
     if (blind < 0 || current[blind]! <= 1) return { digits: current, printed, checkValues };

@@ -27,7 +27,14 @@ const DECIMAL = /^(-?)(\d+)(?:\.(\d+))?(?:e([+-]\d+))?$/;
 /** Split a finite double into signed integer digits and a power-of-ten exponent. @example decimalParts(-12.5) // => { digits: -125n, exponent: -1 } */
 export function decimalParts(value: number): DecimalParts {
   if (!Number.isFinite(value)) throw new Error(`decimalParts requires a finite number, got ${value}`);
-  const match = DECIMAL.exec(String(value));
+  const text = String(value);
+  // Without an exponent (the usual case) the text is [-]digits[.digits]: its digits without the point, and the
+  // number of digits after it (BigInt reads the sign and ignores leading zeros). Otherwise the full pattern below.
+  if (!text.includes('e')) {
+    const point = text.indexOf('.');
+    return point < 0 ? { digits: BigInt(text), exponent: 0 } : { digits: BigInt(text.slice(0, point) + text.slice(point + 1)), exponent: point + 1 - text.length };
+  }
+  const match = DECIMAL.exec(text);
   if (match === null) throw new Error(`decimalParts cannot read ${String(value)}`);
   const [, sign, whole, fraction = '', exp = '0'] = match;
   const digits = BigInt((sign ?? '') + (whole ?? '') + fraction);

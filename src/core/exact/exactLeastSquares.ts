@@ -159,7 +159,9 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
   for (let j = 0; j < p; j++) {
     exactCoefficients[powers[j]!] = rational(beta[j]! * 10n ** BigInt(ev - powers[j]! * eu - lowestExponent), commonDenominator);
     coefficients[powers[j]!] = toNumber(exactCoefficients[powers[j]!]!);
-    for (let k = 0; k < p; k++) {
+    // P is the leading block of the inverse of a symmetric matrix, so it is symmetric exactly (the same integers
+    // above and below the diagonal): each entry is converted once and mirrored.
+    for (let k = 0; k <= j; k++) {
       const entry = covarianceFactor
         ? timesPowerOfTen(
             rational(covarianceFactor.num * solution.numerators[j]![1 + k]!, covarianceFactor.den * det),
@@ -168,6 +170,7 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
         : null;
       const value = entry ? toNumber(entry) : NaN;
       covariance[powers[j]!]![powers[k]!] = value;
+      covariance[powers[k]!]![powers[j]!] = value;
       if (j === k) standardErrors[powers[j]!] = Math.sqrt(value);
     }
   }
