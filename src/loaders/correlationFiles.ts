@@ -35,6 +35,11 @@ export interface WriteFilesOptions {
    * every folder is written in this thread. The files are the same either way.
    */
   readonly workers?: { readonly root: string; readonly folder: string; readonly minimumJobs?: number };
+  /**
+   * Called with a correlation's slug as soon as its folder is complete: written, or found unchanged. Folders are
+   * written in slug order, the order in which Astro renders the pages that wait for them (pendingFiles.ts).
+   */
+  readonly onFolder?: (slug: string) => void;
 }
 
 type FolderJob = { target: string; entry: CorrelationEntry; handbook: HandbookIdentity; digest: string };
@@ -81,6 +86,7 @@ export async function writeCorrelationFiles(
     const digest = createHash('sha256').update(version).update('\0').update(toCacheJson([entry, handbook])).digest('hex');
     const previous = await readFile(path.join(target, DIGEST_FILE), 'utf8').catch(() => undefined);
     if (previous !== digest) jobs.push({ target, entry, handbook, digest });
+    else options.onFolder?.(entry.slug);
   });
   jobs.sort((a, b) => (a.target < b.target ? -1 : 1));
   const pool = await filesPool(jobs.length, options);
@@ -92,12 +98,14 @@ export async function writeCorrelationFiles(
         try {
           await pool.run(job);
           byWorkers++;
+          options.onFolder?.(job.entry.slug);
           return;
         } catch {
           // a worker that failed: write here instead
         }
       }
       await writeCorrelationFolder(job.target, job.entry, job.handbook, job.digest);
+      options.onFolder?.(job.entry.slug);
     });
   } finally {
     await pool?.close();

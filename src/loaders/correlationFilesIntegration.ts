@@ -22,23 +22,17 @@ export function correlationFilesIntegration(): AstroIntegration {
       'astro:config:setup': ({ command, injectRoute }) => {
         if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('../routes/correlationFile.ts', import.meta.url)) });
       },
-      // Pages read parts the loader writes beside the downloads (src/loaders/writtenDownload.ts): the files, left
-      // being written while Astro bundles the server code, must be complete before any page renders. The server
-      // build always runs before the pages are generated; its end is the last point that holds in every build.
       // The downloads the loader prepared start being written once Astro has synced the content and saved its store
-      // (see pendingFiles.ts): the build starts after that.
+      // (see pendingFiles.ts): the build starts after that. They are written while Astro bundles the code and
+      // renders; each correlation page waits for its own folder (it reads the page parts written there).
       'astro:build:start': () => {
         beginFiles();
-      },
-      'astro:build:setup': ({ target, vite }) => {
-        if (target !== 'server') return;
-        vite.plugins = [...(vite.plugins ?? []), { name: 'correlary-files-written', closeBundle: () => filesWritten() }];
       },
       'astro:config:done': ({ config }) => {
         folder = correlationFilesFolder(config.cacheDir);
       },
       'astro:build:done': async ({ dir, logger }) => {
-        await filesWritten(); // done since the server build ended (see astro:build:setup)
+        await filesWritten();
         // Hard links to the cache's files (no bytes copied); copies where the output is on another file system.
         const { copied } = await copyCorrelationFiles(folder, fileURLToPath(dir));
         if (copied > 0) logger.info(`copied ${copied} correlation files into the output (hard links were not possible there)`);

@@ -2,7 +2,7 @@
  * Writing one correlation's folder of downloads in the cache (src/loaders/correlationFiles.ts), in the loader's
  * thread or in a worker (src/loaders/filesWorker.ts): the same function either way, so the same bytes.
  */
-import { mkdir, rm, writeFile } from 'node:fs/promises';
+import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { correlationFiles } from '../components/lib/correlationFiles.ts';
 import { snippetKinds } from '../components/lib/entrySnippets.ts';
@@ -17,19 +17,21 @@ export const DIGEST_FILE = '.digest';
 /**
  * Replace `target` by a new folder holding the files of `entry` (correlationFiles) and `digest`. The old folder is
  * deleted and every file created anew ('wx'), never written to in place: the output of an earlier build may hold
- * hard links to them (src/loaders/linkOrCopy.ts).
+ * hard links to them (src/loaders/linkOrCopy.ts). The file calls are synchronous: in a files worker they cost a
+ * third of the CPU of the same calls through node:fs/promises (measured: 5500 files of 15 KB, 0.1 s against
+ * 0.3 s), and they queue nothing on Node's I/O threads, which the main thread's own file work shares.
  * @example await writeCorrelationFolder('.astro/correlary-files/water-cp', entry, identity, digest) // => 7 (files)
  */
 export async function writeCorrelationFolder(target: string, entry: CorrelationEntry, handbook: HandbookIdentity, digest: string): Promise<number> {
-  await rm(target, { recursive: true, force: true });
-  await mkdir(target, { recursive: true });
+  rmSync(target, { recursive: true, force: true });
+  mkdirSync(target, { recursive: true });
   const files = correlationFiles(entry, handbook);
   // The page's costly parts, built here beside the downloads (its snippets are these files), not published.
   const texts = new Map(files.map((file) => [file.file, file.text]));
   const snippets = Object.fromEntries(snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
   const parts = { file: PAGE_PARTS_FILE, text: JSON.stringify(pageParts(entry, snippets)) };
-  await Promise.all([...files, parts].map((file) => writeFile(path.join(target, file.file), file.text, { flag: 'wx' })));
+  for (const file of [...files, parts]) writeFileSync(path.join(target, file.file), file.text, { flag: 'wx' });
   // Last: a folder left half-written by a failed build has no digest and is written again.
-  await writeFile(path.join(target, DIGEST_FILE), digest, { flag: 'wx' });
+  writeFileSync(path.join(target, DIGEST_FILE), digest, { flag: 'wx' });
   return files.length;
 }

@@ -90,11 +90,11 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     // The handbook identity the files carry, as the pages compute it (handbookIdentity.ts) from the same settings.
     const settings = (await readHandbookSettings(displayDirectory)).settings ?? handbookSettingsSchema.parse({});
     const identity = (slug: string) => identityOf(slug, settings, context.config.base, context.config.site);
-    // Written (many folders in worker threads) while Astro bundles the server code: started when the build starts,
-    // after Astro has saved its content store; the integration waits for them before any page renders and before
-    // putting them into the output (pendingFiles.ts says why not at once).
+    // Written (many folders in worker threads) while Astro bundles and renders: started when the build starts, after
+    // Astro has saved its content store; each page waits for its own folder, the integration for all of them
+    // before putting them into the output (pendingFiles.ts says why not at once).
     const workers = { root, folder: fileURLToPath(new URL('correlary-worker/', context.config.cacheDir)) };
-    deferFiles(() => writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers }));
+    deferFiles((onFolder) => writeCorrelationFiles(correlationFilesFolder(context.config.cacheDir), stored, filesCodeVersion(root, fitCache.version), identity, { workers, onFolder }));
   }
   const { readingMs, fittingMs, refittingMs } = handbook.timing;
   const seconds = (ms: number, digits = 2): string => (ms / 1000).toFixed(digits);

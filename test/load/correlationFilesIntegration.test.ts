@@ -1,37 +1,46 @@
 /**
- * correlationFilesIntegration: the files the loader leaves being written (pendingFiles.ts) are complete before any
- * page renders — the server build's last hook waits for them — and only the server build gets that wait.
- * (Astro 5 builds the server code, then the client code when there is any, then renders: static-build.js.)
+ * correlationFilesIntegration and pendingFiles: the files the loader leaves being written start when the build
+ * starts, and each correlation page waits for its own folder before it reads the parts written there.
  */
 import { describe, expect, it } from 'vitest';
 import { correlationFilesIntegration } from '../../src/loaders/correlationFilesIntegration.ts';
-import { deferFiles, filesWritten, startFiles } from '../../src/loaders/pendingFiles.ts';
-
-type Plugin = { name: string; closeBundle: () => Promise<void> };
-type Setup = (options: { target: 'server' | 'client'; vite: { plugins?: Plugin[] } }) => void;
+import { deferFiles, filesWritten, folderWritten, startFiles } from '../../src/loaders/pendingFiles.ts';
 
 describe('correlationFilesIntegration()', () => {
-  it('the server build ends only when the files started by the loader are written; a failure there fails it', async () => {
-    const setup = (correlationFilesIntegration().hooks as unknown as { 'astro:build:setup': Setup })['astro:build:setup'];
-    const client: { plugins?: Plugin[] } = {};
-    setup({ target: 'client', vite: client });
-    expect(client.plugins ?? []).toHaveLength(0);
-    const server: { plugins?: Plugin[] } = { plugins: [] };
-    setup({ target: 'server', vite: server });
-    expect(server.plugins).toHaveLength(1);
+  it("a correlation page waits for its own folder only; a failure of the files fails the pages still waiting", async () => {
+    // Pages read the page parts written beside the downloads (src/loaders/writtenDownload.ts), which are written
+    // while Astro bundles and renders (pendingFiles.ts).
+    let markDone: (slug: string) => void = () => {};
     let finish = () => {};
-    let written = false;
-    startFiles(new Promise<void>((resolve) => (finish = resolve)).then(() => void (written = true)));
-    let ended = false;
-    const end = server.plugins![0]!.closeBundle().then(() => void (ended = true));
+    deferFiles((done) => {
+      markDone = done;
+      return new Promise<void>((resolve) => (finish = resolve));
+    });
+    const ready: string[] = [];
+    const first = folderWritten('alpha').then(() => void ready.push('alpha'));
+    const second = folderWritten('beta').then(() => void ready.push('beta'));
+    const unfitted = folderWritten('no-fit').then(() => void ready.push('no-fit'));
     await new Promise((resolve) => setTimeout(resolve, 20));
-    expect(ended).toBe(false);
+    expect(ready).toEqual([]);
+    markDone('beta');
+    await second;
+    expect(ready).toEqual(['beta']); // alpha's folder is not written yet
+    markDone('alpha');
+    await first;
+    await folderWritten('alpha'); // done already: at once
+    expect(ready).toEqual(['beta', 'alpha']);
+    // A correlation with no folder (no fit) waits for the whole work.
     finish();
-    await end;
-    expect(written && ended).toBe(true);
-    startFiles(Promise.reject(new Error('disk full')));
-    await expect(server.plugins![0]!.closeBundle()).rejects.toThrow('disk full');
+    await unfitted;
+    expect(ready).toEqual(['beta', 'alpha', 'no-fit']);
+    await filesWritten();
+    // A failure reaches the pages still waiting.
+    deferFiles(() => Promise.reject(new Error('disk full')));
+    await expect(folderWritten('gamma')).rejects.toThrow('disk full');
+    await expect(filesWritten()).rejects.toThrow('disk full');
     startFiles(Promise.resolve());
+    // The server build no longer waits for the files (its hooks add no plugin).
+    expect((correlationFilesIntegration().hooks as Record<string, unknown>)['astro:build:setup']).toBeUndefined();
   });
 
   it('the files the loader prepared start only when the build starts, after Astro has saved its content store', async () => {

@@ -112,16 +112,24 @@ describe('correlationLoader()', () => {
     const pooled = path.join(cacheDir, 'files-pooled');
     const bundles = path.join(cacheDir, 'files-bundles');
     const fitted = stored.filter((entry) => entry.fit !== null).length;
-    expect(await writeCorrelationFiles(here, stored, 'v', identity)).toEqual({ written: fitted, byWorkers: 0 });
+    const fittedSlugs = stored.filter((entry) => entry.fit !== null).map((entry) => entry.slug).sort();
+    // Each folder is said complete once, as soon as it is (pages wait for that: pendingFiles.ts folderWritten).
+    const saidHere: string[] = [];
+    expect(await writeCorrelationFiles(here, stored, 'v', identity, { onFolder: (slug) => saidHere.push(slug) })).toEqual({ written: fitted, byWorkers: 0 });
+    expect(saidHere).toEqual(fittedSlugs); // in this thread, in slug order
     // Every folder of the second one is written by a worker.
-    expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 } })).toEqual({ written: fitted, byWorkers: fitted });
+    const saidPooled: string[] = [];
+    expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 }, onFolder: (slug) => saidPooled.push(slug) })).toEqual({ written: fitted, byWorkers: fitted });
+    expect([...saidPooled].sort()).toEqual(fittedSlugs);
     expect(readdirSync(bundles).filter((name) => /^files-worker-[0-9a-f]{16}\.mjs$/.test(name))).toHaveLength(1);
     const listing = (root: string) => readdirSync(root, { recursive: true, withFileTypes: true }).filter((item) => item.isFile()).map((item) => path.relative(root, path.join(item.parentPath, item.name))).sort();
     expect(listing(pooled)).toEqual(listing(here));
     expect(listing(here).length).toBeGreaterThan(fitted * 5);
     for (const file of listing(here)) expect(readFileSync(path.join(pooled, file)).equals(readFileSync(path.join(here, file))), file).toBe(true);
-    // Unchanged: nothing to write, no worker started.
-    expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 } })).toEqual({ written: 0, byWorkers: 0 });
+    // Unchanged: nothing to write, no worker started; every folder is still said complete.
+    const saidUnchanged: string[] = [];
+    expect(await writeCorrelationFiles(pooled, stored, 'v', identity, { workers: { root: process.cwd(), folder: bundles, minimumJobs: 1 }, onFolder: (slug) => saidUnchanged.push(slug) })).toEqual({ written: 0, byWorkers: 0 });
+    expect([...saidUnchanged].sort()).toEqual(fittedSlugs);
   });
 
   it('filesWritten waits for the files last started and passes on their failure', async () => {
