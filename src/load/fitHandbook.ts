@@ -7,10 +7,11 @@ import path from 'node:path';
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
 import { fitCacheKey, pruneFitCache, readCachedSummary, writeCachedFit, type FitCache } from './fitCache.ts';
 import { cacheRecord } from './cacheRecord.ts';
-import { createFitPool, poolSize } from './fitPool.ts';
+import { createFitPool, POOL_MINIMUM_JOBS, poolSize, type FitPool } from './fitPool.ts';
 import { readHandbook } from './readHandbook.ts';
 import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
 import type { DatasetResult, LoadedCorrelation } from './types.ts';
+import { SLUG_PATTERN } from '../schema/index.ts';
 import { reviewDiagnostics, reviewTrail, type ReviewTrail } from './review/reviewTrail.ts';
 
 export interface FittedDataset {
@@ -26,9 +27,11 @@ export interface FittedHandbook {
   /** Every error and warning, in file and line order. */
   readonly diagnostics: readonly Diagnostic[];
   /**
-   * Milliseconds spent reading and validating, and fitting (for progress summaries and bench:build). `fittingMs` is
-   * the whole fitting pass (cache keys and look-ups, fits, review trails, pruning); `refittingMs`, part of it, is the
-   * time spent fitting what the cache did not hold (starting workers included).
+   * Milliseconds spent reading and validating, and fitting (for progress summaries and bench:build); they add up to
+   * the pass's wall time. `fittingMs` is the fitting pass (cache keys and look-ups, fits, review trails, pruning)
+   * less the fits that worker threads completed while folders were still being read (see fitHandbook);
+   * `refittingMs` is the wall time from the start of fitting what the cache did not hold (starting workers
+   * included) until the last of those fits, reading it overlapped included.
    */
   readonly timing: { readonly readingMs: number; readonly fittingMs: number; readonly refittingMs: number };
   /** How many fits came from the fit cache, when one was given. */
@@ -66,62 +69,121 @@ function fitHere(correlation: LoadedCorrelation, cache: FitCache | undefined, ke
   return { ...fitted, cacheKey: key };
 }
 
-/** @example (await fitHandbook('content')).datasets.length // => 13 for the demo handbook */
+interface Item {
+  readonly read: DatasetResult;
+  /** The folder's correlation when it was read without errors of its own (folder-wide errors come later). */
+  readonly correlation: LoadedCorrelation | undefined;
+  readonly key: string | undefined;
+  /** Read from the fit cache rather than fitted. */
+  readonly cached: boolean;
+  fitted: DatasetFit | undefined;
+  /** The fit under way in a worker (or here, when no worker could start). */
+  work?: Promise<void>;
+}
+
+/**
+ * Read, validate and fit every folder. Fitting starts while the other folders are still being read: each folder is
+ * looked up in the cache as soon as it is read, and once POOL_MINIMUM_JOBS (or `workers.minimumJobs`) folders need
+ * fitting, worker threads start and fit them while reading goes on; fewer are fitted here after reading. Which
+ * thread fits a dataset never changes its fit (the same code runs), so the result does not depend on timing.
+ *
+ * Timing: `readingMs` and `fittingMs` add up to the pass's wall time. The time this thread spends on the fitting
+ * pass while folders are still being read (cache keys, look-ups, starting workers) counts as fitting; fits that
+ * worker threads complete meanwhile are hidden behind reading and count in neither, so `fittingMs` is the fitting
+ * that reading could not hide.
+ * @example (await fitHandbook('content')).datasets.length // => 13 for the demo handbook
+ */
 export async function fitHandbook(directory: string, options: FitHandbookOptions = {}): Promise<FittedHandbook> {
   const started = performance.now();
-  const handbook = await readHandbook(directory);
-  const readingMs = performance.now() - started;
+  const cache = options.fitCache;
+  const workers = options.workers;
+  const minimumJobs = workers?.minimumJobs ?? POOL_MINIMUM_JOBS;
+  const items = new Map<string, Item>();
+  let total = 0;
+  let done = 0;
+  const progress = () => options.onFitted?.(++done, total);
+  let fittingWhileReading = 0;
+  let refitStarted: number | undefined;
+  let pool: Promise<FitPool | undefined> | undefined;
+  const waiting: Item[] = [];
+  const fitInPool = (item: Item) => {
+    item.work = pool!.then(async (ready) => {
+      let fitted: DatasetFit | undefined;
+      if (ready !== undefined) {
+        try {
+          fitted = { ...(await ready.fit(item.correlation!, cache!.directory, item.key!)), cacheKey: item.key! };
+        } catch {
+          fitted = undefined; // a worker that failed: fit here instead
+        }
+      }
+      item.fitted = fitted ?? fitHere(item.correlation!, cache, item.key);
+      progress();
+    });
+  };
+  const onDataset = (read: DatasetResult, folders: number) => {
+    const begun = performance.now();
+    total = folders;
+    // A folder with errors of its own is not fitted; neither is one whose name is not a slug (readHandbook says so).
+    const correlation = SLUG_PATTERN.test(read.slug) ? read.correlation : undefined;
+    const cached = correlation === undefined || cache === undefined ? undefined : fromCache(correlation, cache);
+    const item: Item = { read, correlation, key: cached?.key, cached: cached?.fitted !== undefined, fitted: cached?.fitted };
+    items.set(read.folder, item);
+    if (item.fitted !== undefined) progress();
+    else if (correlation !== undefined) {
+      if (pool !== undefined) fitInPool(item);
+      else {
+        waiting.push(item);
+        if (cache !== undefined && workers !== undefined && waiting.length >= minimumJobs) {
+          refitStarted = performance.now();
+          // Sized for the folders that may still need fitting: those waiting and those not read yet.
+          const size = poolSize(waiting.length + folders - items.size, minimumJobs);
+          pool = createFitPool(workers.root, path.join(cache.directory, '..', 'correlary-worker'), size).catch(() => undefined);
+          for (const queued of waiting.splice(0)) fitInPool(queued);
+        }
+      }
+    }
+    fittingWhileReading += performance.now() - begun;
+  };
+  const handbook = await readHandbook(directory, { onDataset });
+  const readEnded = performance.now();
+  // Fewer folders to fit than it takes to start workers: here.
+  if (waiting.length > 0) refitStarted ??= performance.now();
+  for (const item of waiting.splice(0)) {
+    item.fitted = fitHere(item.correlation!, cache, item.key);
+    progress();
+  }
+  try {
+    await Promise.all([...items.values()].map((item) => item.work));
+  } finally {
+    await (await pool)?.close();
+  }
+  const refittingMs = refitStarted === undefined ? 0 : performance.now() - refitStarted;
+
   const diagnostics: Diagnostic[] = [...handbook.diagnostics];
   const datasets: FittedDataset[] = [];
   const slugs = new Set(handbook.datasets.map((read) => read.slug));
-  const total = handbook.datasets.length;
-  let done = 0;
-  const progress = () => options.onFitted?.(++done, total);
-  // First what the cache holds, then the rest: in worker threads when there are many, else here.
-  const cache = options.fitCache;
-  const prepared = handbook.datasets.map((read) => {
-    // Errors about the folder as a whole (an invalid or duplicate slug) belong to it too: such a folder is not fitted.
+  const keys = new Set<string>();
+  let cachedFits = 0;
+  for (const read of handbook.datasets) {
+    // Errors about the folder as a whole (an invalid or duplicate slug) belong to it too: such a folder's fit, if
+    // one was made while reading, is not used.
     const folderErrors = handbook.diagnostics.filter(
       (diagnostic) => diagnostic.severity === 'error' && (diagnostic.file === read.folder || diagnostic.file === read.metadataPath),
     );
+    const item = items.get(read.folder)!;
     const dataset = folderErrors.length ? { ...read, diagnostics: [...read.diagnostics, ...folderErrors] } : read;
-    const correlation = folderErrors.length ? undefined : dataset.correlation;
-    const cached = correlation === undefined || cache === undefined ? undefined : fromCache(correlation, cache);
-    if (cached?.fitted !== undefined) progress();
-    return { read, dataset, correlation, key: cached?.key, fitted: cached?.fitted };
-  });
-  const cachedFits = prepared.filter((item) => item.fitted !== undefined).length;
-  const missing = prepared.filter((item) => item.correlation !== undefined && item.fitted === undefined);
-  const refitStarted = performance.now();
-  const pool = cache !== undefined && options.workers !== undefined ? await createFitPool(options.workers.root, path.join(cache.directory, '..', 'correlary-worker'), poolSize(missing.length, options.workers.minimumJobs)) : undefined;
-  try {
-    await Promise.all(
-      missing.map(async (item) => {
-        const correlation = item.correlation!;
-        let fitted: DatasetFit | undefined;
-        if (pool !== undefined) {
-          try {
-            fitted = { ...(await pool.fit(correlation, cache!.directory, item.key!)), cacheKey: item.key! };
-          } catch {
-            fitted = undefined; // a worker that failed: fit here instead
-          }
-        }
-        item.fitted = fitted ?? fitHere(correlation, cache, item.key);
-        progress();
-      }),
-    );
-  } finally {
-    await pool?.close();
-  }
-  const refittingMs = performance.now() - refitStarted;
-  for (const { read, dataset, correlation, fitted } of prepared) {
+    const correlation = folderErrors.length ? undefined : item.correlation;
+    const fitted = correlation === undefined ? undefined : item.fitted;
+    if (correlation !== undefined && item.key !== undefined) keys.add(item.key);
+    if (correlation !== undefined && item.cached) cachedFits++;
     diagnostics.push(...read.diagnostics);
     if (fitted) diagnostics.push(...fitted.diagnostics);
     const review = fitted === undefined || correlation === undefined ? undefined : reviewTrail(correlation, fitted.fit);
     if (review !== undefined && correlation !== undefined) diagnostics.push(...reviewDiagnostics(correlation, review, slugs));
     datasets.push({ dataset, fitted, review });
   }
-  if (cache !== undefined && options.prune) pruneFitCache(cache.directory, new Set(prepared.flatMap((item) => (item.key === undefined ? [] : [item.key]))));
-  const fittingMs = performance.now() - started - readingMs;
-  return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs, refittingMs }, cachedFits };
+  if (cache !== undefined && options.prune) pruneFitCache(cache.directory, keys);
+  const ended = performance.now();
+  const readingMs = readEnded - started - fittingWhileReading;
+  return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs: ended - started - readingMs, refittingMs }, cachedFits };
 }

@@ -19,12 +19,21 @@ export interface HandbookResult {
   readonly settings: HandbookSettingsResult;
 }
 
+export interface ReadHandbookOptions {
+  /**
+   * Called with each folder's result as soon as it is read (in no fixed order), and with how many folders there
+   * are: fitHandbook starts fitting while the other folders are still being read. Problems that concern several
+   * folders (duplicate slugs) are only known from the result.
+   */
+  readonly onDataset?: (dataset: DatasetResult, folders: number) => void;
+}
+
 /**
  * Read all correlation folders in `directory`. Folders whose names start with '.' or '_' are skipped, so drafts
  * can be parked as `_draft-name`. Loose files at the top level are ignored.
  * @throws Error `readHandbook requires a directory` when `directory` is not one
  */
-export async function readHandbook(directory: string): Promise<HandbookResult> {
+export async function readHandbook(directory: string, options: ReadHandbookOptions = {}): Promise<HandbookResult> {
   const info = await stat(directory).catch(() => undefined);
   if (info === undefined || !info.isDirectory()) throw new Error('readHandbook requires a directory');
   const entries = await readdir(directory, { withFileTypes: true });
@@ -32,7 +41,13 @@ export async function readHandbook(directory: string): Promise<HandbookResult> {
     .filter((entry) => entry.isDirectory() && !entry.name.startsWith('.') && !entry.name.startsWith('_'))
     .map((entry) => entry.name)
     .sort();
-  const datasets = await Promise.all(folders.map((name) => readDataset(path.join(directory, name))));
+  const datasets = await Promise.all(
+    folders.map(async (name) => {
+      const dataset = await readDataset(path.join(directory, name));
+      options.onDataset?.(dataset, folders.length);
+      return dataset;
+    }),
+  );
   const settings = await readHandbookSettings(directory);
   const diagnostics: Diagnostic[] = [...settings.diagnostics];
 

@@ -46,6 +46,33 @@ describe('fitHandbook in worker threads', () => {
     expect(fitsOf(again)).toEqual(fitsOf(fresh));
   });
 
+  it('workers that start while folders are still being read, and folders whose slugs clash or are invalid, give the one-thread result', async () => {
+    // fitHandbook starts fitting once `minimumJobs` folders need it, while the rest are still being read; folders
+    // with folder-wide errors (a duplicate slug, a name that is not a slug) are known only after reading, and any
+    // fit made for them meanwhile must not be used.
+    const content = path.join(root, 'content-clash');
+    await cp('content', content, { recursive: true });
+    await cp(path.join(content, 'corvane-12-density'), path.join(content, 'Not_A_Slug'), { recursive: true });
+    await cp(path.join(content, 'corvane-12-density'), path.join(content, 'zz-copy'), { recursive: true });
+    const metadata = path.join(content, 'zz-copy', 'correlation.yaml');
+    await writeFile(metadata, `slug: corvane-12-density\n${await readFile(metadata, 'utf8')}`);
+    const fresh = await fitHandbook(content);
+    expect(fresh.diagnostics.filter((item) => item.severity === 'error').map((item) => item.message)).toEqual(
+      expect.arrayContaining([expect.stringContaining("is not a valid slug"), expect.stringContaining("slug 'corvane-12-density' is also used by")]),
+    );
+    for (const minimumJobs of [1, 5]) {
+      const fitCache = { directory: path.join(root, `cache-clash-${minimumJobs}`, 'correlary-fits'), version: 'pool-test-1' };
+      const pooled = await fitHandbook(content, { fitCache, workers: { root: process.cwd(), minimumJobs }, prune: true });
+      expect(fitsOf(pooled)).toEqual(fitsOf(fresh));
+      expect(pooled.diagnostics).toEqual(fresh.diagnostics);
+      expect(pooled.datasets.map((item) => item.dataset)).toEqual(fresh.datasets.map((item) => item.dataset));
+      // Only records of folders that are used stay in the cache (none for the three folders in error).
+      const used = pooled.datasets.filter((item) => item.fitted?.cacheKey !== undefined).length;
+      expect(used).toBe(fresh.datasets.filter((item) => item.fitted !== undefined).length);
+      expect((await readdir(fitCache.directory)).filter((name) => !name.endsWith('.summary.json'))).toHaveLength(used);
+    }
+  });
+
   it('prune: after a data file changes, the old record is deleted and every record left is one the handbook uses', async () => {
     const content = path.join(root, 'content');
     const fitCache = { directory: path.join(root, 'cache-prune', 'correlary-fits'), version: 'pool-test-1' };
