@@ -2,12 +2,13 @@
  * The fit chart as one standalone SVG document, without a browser: the data (with ± uncertainty bars), the points
  * left out (open red rings), the fitted curve with its confidence and prediction bands, and below it the residuals
  * with the same bands drawn about the curve. Used as the page's picture when scripts do not run, in print, and by
- * `correlary fit --plot`. Scales and paths come from chartScales/chartPaths, as in the browser chart.
+ * `correlary fit --plot`. Scales and paths are those of chartScales and chartPaths, as in the browser chart
+ * (written by fitChartScales and svgPaths, the same numbers and text at less cost).
  * O(n + curve rows).
  */
 import { CHART_COLORS, CHART_LAYOUT } from './chartLayout.ts';
-import { bandPath, linePath } from './chartPaths.ts';
-import { chartScales } from './chartScales.ts';
+import { fitChartScales } from './fitChartScales.ts';
+import { svgBandPath as bandPath, svgLinePath as linePath } from './svgPaths.ts';
 import type { FitChartData } from './chartTypes.ts';
 import { escapeXml } from './escapeXml.ts';
 import { c, svgAxes as axes } from './svgAxes.ts';
@@ -33,7 +34,7 @@ export interface RenderFitSvgOptions {
  */
 export function renderFitSvg(data: FitChartData, options: RenderFitSvgOptions = {}): string {
   const { width, mainHeight, residualHeight, margin } = CHART_LAYOUT;
-  const { x, y, residual } = chartScales(data);
+  const { x, y, residual } = fitChartScales(data);
   const level = Math.round(data.confidence * 100);
   const title = options.title ?? `Data and fitted curve with ${level} % confidence and prediction bands, and the residuals below`;
   const bars = data.points

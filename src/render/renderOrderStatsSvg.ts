@@ -6,7 +6,7 @@
  */
 import { scaleLinear, scaleLog, type ScaleContinuousNumeric } from 'd3-scale';
 import { CHART_COLORS } from './chartLayout.ts';
-import { linePath } from './chartPaths.ts';
+import { svgLinePath as linePath } from './svgPaths.ts';
 import { paddedExtent } from './chartScales.ts';
 import { escapeXml } from './escapeXml.ts';
 import { c } from './svgAxes.ts';

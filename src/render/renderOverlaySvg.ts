@@ -6,7 +6,7 @@
  */
 import { scaleLinear } from 'd3-scale';
 import { CHART_LAYOUT } from './chartLayout.ts';
-import { bandPath, linePath } from './chartPaths.ts';
+import { svgBandPath as bandPath, svgLinePath as linePath } from './svgPaths.ts';
 import { paddedExtent } from './chartScales.ts';
 import type { CurveRow } from './chartTypes.ts';
 import { escapeXml } from './escapeXml.ts';

@@ -5,12 +5,13 @@
 import type { ScaleLinear } from 'd3-scale';
 import { CHART_LAYOUT } from './chartLayout.ts';
 import { escapeXml } from './escapeXml.ts';
+import { hundredthsText } from './hundredthsText.ts';
 
 type Scale = ScaleLinear<number, number>;
 
-/** A coordinate with 2 decimals. @example c(1.23456) // => "1.23" */
+/** A coordinate with 2 decimals (hundredthsText). @example c(1.23456) // => "1.23" */
 export function c(value: number): string {
-  return String(Math.round(value * 100) / 100);
+  return hundredthsText(value);
 }
 
 /**

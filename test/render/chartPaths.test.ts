@@ -1,12 +1,14 @@
 /**
- * bandPath and linePath against d3-shape's area() and line() with digits(2), the linear curve and the same defined()
- * test (d3-shape is the outside reference: the paths were drawn by it before they were written out): the same text
- * for random rows with nulls (breaks, one-point pieces, empty input), on a linear and a log scale.
+ * bandPath and linePath (the browser's) and svgBandPath and svgLinePath (the build's SVG documents) against
+ * d3-shape's area() and line() with digits(2), the linear curve and the same defined() test (d3-shape is the outside
+ * reference: the paths were drawn by it before they were written out): the same text for random rows with nulls
+ * (breaks, one-point pieces, empty input), on a linear and a log scale.
  */
 import { scaleLinear, scaleLog } from 'd3-scale';
 import { area, line } from 'd3-shape';
 import { describe, expect, it } from 'vitest';
 import { bandPath, linePath } from '../../src/render/chartPaths.ts';
+import { svgBandPath, svgLinePath } from '../../src/render/svgPaths.ts';
 
 type Row = readonly (number | null)[];
 
@@ -46,10 +48,12 @@ describe('chart paths', () => {
       const y = trial % 2 ? log : linear;
       for (const [low, high] of [[2, 3], [4, 5], [1, 2]] as const) {
         expect(bandPath(rows, x, y, low, high)).toBe(d3Band(rows, x, y, low, high));
+        expect(svgBandPath(rows, x, y, low, high)).toBe(d3Band(rows, x, y, low, high));
         compared++;
       }
       for (const column of [1, 3]) {
         expect(linePath(rows, x, y, column)).toBe(d3Line(rows, x, y, column));
+        expect(svgLinePath(rows, x, y, column)).toBe(d3Line(rows, x, y, column));
         compared++;
       }
     }
@@ -61,5 +65,20 @@ describe('chart paths', () => {
     expect(linePath([[0.5, 0.25]], x, x, 1)).toBe('M50,25Z');
     expect(linePath([], x, x, 1)).toBe('');
     expect(bandPath([[0.5, 0.25, 0.75]], x, x, 1, 2)).toBe('M50,75L50,25Z');
+    expect(svgLinePath([[0.5, 0.25]], x, x, 1)).toBe('M50,25Z');
+    expect(svgLinePath([], x, x, 1)).toBe('');
+    expect(svgBandPath([[0.5, 0.25, 0.75]], x, x, 1, 2)).toBe('M50,75L50,25Z');
+  });
+
+  it('svgBandPath and svgLinePath give the same text as bandPath and linePath over pixels far outside the frame', () => {
+    const next = random(11);
+    const x = scaleLinear().domain([0, 1]).range([72, 740]);
+    for (let trial = 0; trial < 300; trial++) {
+      // Values up to ±10^(trial mod 16) data units: coordinates from hundredths of a pixel to beyond 10^13 pixels.
+      const spread = 10 ** (trial % 16);
+      const rows: Row[] = Array.from({ length: 1 + Math.floor(next() * 30) }, () => [next(), ...Array.from({ length: 3 }, () => (next() < 0.1 ? null : (next() - 0.5) * spread))]);
+      expect(svgBandPath(rows, x, x, 1, 2)).toBe(bandPath(rows, x, x, 1, 2));
+      expect(svgLinePath(rows, x, x, 3)).toBe(linePath(rows, x, x, 3));
+    }
   });
 });

@@ -47,8 +47,27 @@ export function fittedCoordinates(entry: CorrelationEntry, fit: PolynomialFit, m
   };
 }
 
-/** Chart data for one correlation, with bands on `count` grid points (default 120). */
+/**
+ * The last chart data computed, by the objects it was computed from: a correlation's folder asks for the same
+ * entry's chart data twice (plot.svg and chart-data.json in correlationFiles, the embedded JSON in pageParts), and
+ * the result is a pure function of the entry, the fit and the count, never changed by its users. One slot only,
+ * so that nothing is kept beyond the correlation being built.
+ */
+let last: { entry: CorrelationEntry; fit: PolynomialFit; count: number; data: FitChartData } | undefined;
+
+/**
+ * Chart data for one correlation, with bands on `count` grid points (default 120). The same entry and fit objects
+ * asked for again get the same (read-only) object back.
+ * @example chartData(entry, fit).curve.length // => 120
+ */
 export function chartData(entry: CorrelationEntry, fit: PolynomialFit, count = 120): FitChartData {
+  if (last !== undefined && last.entry === entry && last.fit === fit && last.count === count) return last.data;
+  const data = computeChartData(entry, fit, count);
+  last = { entry, fit, count, data };
+  return data;
+}
+
+function computeChartData(entry: CorrelationEntry, fit: PolynomialFit, count: number): FitChartData {
   const { variable, property } = entry.meta;
   const labels = {
     xLabel: `${variable.name}, ${labelSymbol(variable.symbol)}${unitSuffix(variable.unit) ? ` (${variable.unit})` : ''}`,

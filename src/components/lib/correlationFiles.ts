@@ -49,6 +49,6 @@ export function correlationFiles(entry: CorrelationEntry, handbook: HandbookIden
     { file: 'plot.svg', contentType: 'image/svg+xml; charset=utf-8', text: renderFitSvg(chart, { title: `${entry.meta.title}: data, fitted curve and bands; residuals below`, description: plotDescription(entry, handbook) }) },
     // Small data sets embed their chart data in the page and get no file.
     ...(usedPoints(entry).length > EMBED_POINT_LIMIT ? [{ file: 'chart-data.json', contentType: 'application/json', text: JSON.stringify(chart) }] : []),
-    ...entrySnippets(entry, handbook).map((snippet) => ({ file: snippet.file, contentType: `${snippet.contentType}; charset=utf-8`, text: snippet.text })),
+    ...entrySnippets(entry, handbook, record).map((snippet) => ({ file: snippet.file, contentType: `${snippet.contentType}; charset=utf-8`, text: snippet.text })),
   ];
 }

@@ -11,6 +11,7 @@ import {
   snippetIdentifier,
   snippetSource,
   spreadsheetSnippet,
+  type CorrelationRecord,
   type HandbookIdentity,
   type SnippetSource,
 } from '../../export/index.ts';
@@ -49,12 +50,14 @@ export function snippetKinds(slug: string): Omit<EntrySnippet, 'text'>[] {
 
 /**
  * @param handbook the handbook identity the snippets' headers carry (handbookIdentity.ts)
+ * @param record entryRecord(entry, handbook) when the caller has it already (correlationFiles), so that it is not
+ *   built twice
  * @throws Error when the entry has no fit
  */
-export function entrySnippets(entry: CorrelationEntry, handbook?: HandbookIdentity): EntrySnippet[] {
+export function entrySnippets(entry: CorrelationEntry, handbook?: HandbookIdentity, record?: CorrelationRecord): EntrySnippet[] {
   const fit = fitOf(entry);
   if (fit === null) throw new Error(`entrySnippets requires a fit; ${entry.slug} has none`);
-  const source = snippetSource(fit, entryRecord(entry, handbook), `Correlary ${version}`);
+  const source = snippetSource(fit, record ?? entryRecord(entry, handbook), `Correlary ${version}`);
   const texts: Record<string, (source: SnippetSource) => string> = {
     python: pythonSnippet,
     javascript: javascriptSnippet,
