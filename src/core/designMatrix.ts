@@ -12,9 +12,20 @@ export function designMatrix(values: readonly number[], powers: readonly number[
   // Written straight into the matrix's rows (no intermediate arrays); an empty list is the 0×0 matrix, as before.
   if (values.length === 0) return new Matrix([]);
   const matrix = new Matrix(values.length, powers.length);
-  values.forEach((value, i) => {
+  for (let i = 0; i < values.length; i++) {
     const scale = rowScale ? rowScale[i]! : 1;
-    powers.forEach((k, j) => matrix.set(i, j, value ** k * scale));
-  });
+    const value = values[i]!;
+    for (let j = 0; j < powers.length; j++) matrix.set(i, j, value ** powers[j]! * scale);
+  }
   return matrix;
+}
+
+/**
+ * One row of the design as a plain array: value^k · scale for each power k (the same expression as designMatrix's).
+ * @example designRow(0.5, [0, 1, 2], 2) // => [2, 1, 0.5]
+ */
+export function designRow(value: number, powers: readonly number[], scale = 1): number[] {
+  const row = new Array<number>(powers.length);
+  for (let j = 0; j < powers.length; j++) row[j] = value ** powers[j]! * scale;
+  return row;
 }

@@ -21,7 +21,8 @@
  * @example fitCurves({ x: [0, 1, 2, 3], y: [1, 3, 5, 7] }, {}, [1, 2]).map((fit) => fit?.order) // => [1, 2]
  */
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
-import { designMatrix } from './designMatrix.ts';
+import { designRow } from './designMatrix.ts';
+import { rowTimes, solveLeading, type QrStorage } from './qrSolve.ts';
 import { domainMapFor, toUnit } from './domain.ts';
 import { curveFitOf, fitCurve } from './fitCurve.ts';
 import { uncertaintyProfile } from './stats/localUncertainty.ts';
@@ -29,38 +30,6 @@ import { fittedSpaceWeights, transformData } from './transforms.ts';
 import { validateFitInput, type ValidatedOptions } from './validateFitInput.ts';
 import type { CurveFit, FitData, FitOptions } from './types.ts';
 
-/** ml-matrix's QR keeps its Householder vectors and R above the diagonal in `QR`, the diagonal of R in `Rdiag`. */
-interface QrStorage {
-  readonly QR: Matrix;
-  readonly Rdiag: Float64Array;
-}
-
-/**
- * ml-matrix's QrDecomposition.solve for one right-hand side, using only the first p reflectors and the leading p×p
- * block of R: the solve of the design's first p columns (same loops, same order of operations).
- */
-function solveLeading(qr: readonly (readonly number[])[], rdiag: Float64Array, p: number, b: readonly number[]): number[] {
-  const m = qr.length;
-  const x = b.slice();
-  for (let k = 0; k < p; k++) {
-    let s = 0;
-    for (let i = k; i < m; i++) s += qr[i]![k]! * x[i]!;
-    s = -s / qr[k]![k]!;
-    for (let i = k; i < m; i++) x[i] = x[i]! + s * qr[i]![k]!;
-  }
-  for (let k = p - 1; k >= 0; k--) {
-    x[k] = x[k]! / rdiag[k]!;
-    for (let i = 0; i < k; i++) x[i] = x[i]! - x[k]! * qr[i]![k]!;
-  }
-  return x.slice(0, p);
-}
-
-/** Row i of `matrix` (its first p columns) times `vector`, summed as ml-matrix's mmul sums. */
-function rowTimes(row: readonly number[], vector: readonly number[], p: number): number {
-  let s = 0;
-  for (let k = 0; k < p; k++) s += row[k]! * vector[k]!;
-  return s;
-}
 
 function validated(data: FitData, options: FitOptions): ValidatedOptions | null {
   try {
@@ -110,20 +79,20 @@ export function fitCurves(data: FitData, options: Omit<FitOptions, 'order'>, ord
 
   const map = domainMapFor(u, intercept);
   const t = u.map((value) => toUnit(map, value));
-  const A = designMatrix(t, powersOf(highest), rootWeights);
-  const columns = A.columns;
+  // The design of the highest order (designMatrix's entries, t^k·√w) and its column-equilibrated copy, as plain rows:
+  // the factorisation gets one Matrix made from the scaled rows, and the loops below read the rows themselves.
+  const highestPowers = powersOf(highest);
+  const columns = highestPowers.length;
+  const rows = t.map((value, i) => designRow(value, highestPowers, rootWeights[i]!));
   const norms: number[] = [];
   for (let j = 0; j < columns; j++) {
     let sum = 0;
-    for (let i = 0; i < n; i++) sum += A.get(i, j) ** 2;
+    for (let i = 0; i < n; i++) sum += rows[i]![j]! ** 2;
     norms.push(Math.sqrt(sum) || 1);
   }
-  const scaled = new Matrix(n, columns);
-  for (let i = 0; i < n; i++) for (let j = 0; j < columns; j++) scaled.set(i, j, A.get(i, j) / norms[j]!);
-  const qr = new QrDecomposition(scaled) as unknown as QrStorage;
+  const scaledRows = rows.map((row) => row.map((value, j) => value / norms[j]!));
+  const qr = new QrDecomposition(new Matrix(scaledRows)) as unknown as QrStorage;
   const factors = qr.QR.to2DArray();
-  const rows = A.to2DArray();
-  const scaledRows = scaled.to2DArray();
   const target = v.map((value, i) => value * rootWeights[i]!);
   const profile = weighted ? uncertaintyProfile(data.x, weights.map((w) => 1 / Math.sqrt(w))) : null;
 

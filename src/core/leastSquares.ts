@@ -18,6 +18,7 @@
  */
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
 import { FitError } from './fitError.ts';
+import { rowTimes, solveLeading, type QrStorage } from './qrSolve.ts';
 
 export interface LinearSolution {
   /** Solution β (length p). */
@@ -97,10 +98,14 @@ export function solveLeastSquares(
   if (n < k) throw new FitError('too-few-points', `${n} points cannot determine ${k} free coefficients`);
 
   const norms = columnNorms(free);
-  // free with each column divided by its norm (divRowVector's arithmetic), written straight into a new matrix.
-  const scaled = new Matrix(n, k);
-  for (let i = 0; i < n; i++) for (let j = 0; j < k; j++) scaled.set(i, j, free.get(i, j) / norms[j]!);
-  const qr = new QrDecomposition(scaled);
+  // free with each column divided by its norm (divRowVector's arithmetic), as plain rows and as the matrix factored.
+  const scaledRows: number[][] = [];
+  for (let i = 0; i < n; i++) {
+    const row = new Array<number>(k);
+    for (let j = 0; j < k; j++) row[j] = free.get(i, j) / norms[j]!;
+    scaledRows.push(row);
+  }
+  const qr = new QrDecomposition(n === 0 ? new Matrix(0, k) : new Matrix(scaledRows));
   const svd = new SingularValueDecomposition(qr.upperTriangularMatrix, { computeLeftSingularVectors: false });
   const singular = svd.diagonal;
   const largest = singular[0] ?? 0;
@@ -114,12 +119,16 @@ export function solveLeastSquares(
   let leverage: number[] = new Array(n).fill(0);
   let unscaledZ: number[][] = [];
   if (k > 0) {
-    const rhs = Matrix.columnVector(target);
-    let solution = qr.solve(rhs);
+    // ml-matrix's solve and products with the same loops on plain arrays (qrSolve.ts): the same numbers.
+    const { QR, Rdiag } = qr as unknown as QrStorage;
+    if (!qr.isFullRank()) throw new Error('Matrix is rank deficient'); // as ml-matrix's solve
+    const factors = QR.to2DArray();
+    let solution = solveLeading(factors, Rdiag, k, target);
     // One step of iterative refinement: r = b − A·z, z ← z + QR⁻¹·r.
-    const residual = rhs.clone().sub(scaled.mmul(solution));
-    solution = solution.add(qr.solve(residual));
-    z = solution.to1DArray().map((value, j) => value / norms[j]!);
+    const residual = target.map((value, i) => value - rowTimes(scaledRows[i]!, solution, k));
+    const correction = solveLeading(factors, Rdiag, k, residual);
+    solution = solution.map((value, j) => value + correction[j]!);
+    z = solution.map((value, j) => value / norms[j]!);
     const Q = qr.orthogonalMatrix;
     leverage = Array.from({ length: n }, (_, i) => {
       let sum = 0;
@@ -145,7 +154,11 @@ export function solveLeastSquares(
     const covZ = new Matrix(unscaledZ.length ? unscaledZ : [[]]);
     unscaledCovariance = k > 0 ? zMatrix.mmul(covZ).mmul(zMatrix.transpose()).to2DArray() : Array.from({ length: p }, () => new Array(p).fill(0));
   }
-  const fitted = A.mmul(Matrix.columnVector(beta)).to1DArray();
+  const fitted = Array.from({ length: n }, (_, i) => {
+    let sum = 0;
+    for (let j = 0; j < p; j++) sum += A.get(i, j) * beta[j]!; // A·β, summed as ml-matrix's mmul sums
+    return sum;
+  });
   return {
     beta,
     unscaledCovariance,

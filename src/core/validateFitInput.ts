@@ -43,12 +43,11 @@ export function validateFitData(data: FitData): void {
     throw new FitError('constant-x', n === 1 ? 'the data have one point; a correlation needs at least two different x values' : 'all x values are equal, so no curve in x can be fitted');
   }
   // Sums of squares of values beyond 1e150 overflow double precision: ask for other units instead of printing Infinity.
+  const tooLarge = (name: 'x' | 'y', value: number, i: number) =>
+    new FitError('out-of-range', `${name} = ${value} is too large to fit in double precision (limit ${MAX_MAGNITUDE}); change its unit`, i);
   for (let i = 0; i < n; i++) {
-    for (const [name, value] of [['x', data.x[i]!], ['y', data.y[i]!]] as const) {
-      if (Math.abs(value) > MAX_MAGNITUDE) {
-        throw new FitError('out-of-range', `${name} = ${value} is too large to fit in double precision (limit ${MAX_MAGNITUDE}); change its unit`, i);
-      }
-    }
+    if (Math.abs(data.x[i]!) > MAX_MAGNITUDE) throw tooLarge('x', data.x[i]!, i);
+    if (Math.abs(data.y[i]!) > MAX_MAGNITUDE) throw tooLarge('y', data.y[i]!, i);
   }
 }
 
