@@ -12,6 +12,7 @@ import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { fitHandbook, formatDiagnostic } from '../load/index.ts';
 import { fitCodeVersion } from '../load/fitCodeVersion.ts';
+import { offerCheckedHandbook } from '../loaders/checkedHandbook.ts';
 import { CliError } from './cliError.ts';
 import { createProgress } from './progress.ts';
 import { packageRoot } from './packageRoot.ts';
@@ -72,7 +73,10 @@ export async function runBuild(args: string[]): Promise<number> {
   const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(packageRoot()) };
   const progress = createProgress();
   progress.update(`reading ${options.content}`);
-  const handbook = await fitHandbook(options.content, { fitCache, workers: { root: packageRoot() }, prune: true, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
+  // Read as the content loader names it (relative to the working directory), so that the loader can take this pass
+  // instead of making it again (src/loaders/checkedHandbook.ts).
+  const directory = path.relative(process.cwd(), content) || '.';
+  const handbook = await fitHandbook(directory, { fitCache, workers: { root: packageRoot() }, prune: true, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
   progress.done();
   const errors = handbook.diagnostics.filter((diagnostic) => diagnostic.severity === 'error');
   if (errors.length > 0) {
@@ -87,6 +91,7 @@ export async function runBuild(args: string[]): Promise<number> {
   // Vite lets environment variables named like its import.meta.env keys override them; a BASE_URL left in a shell
   // or CI environment would silently replace --base in every link.
   for (const key of ['BASE_URL', 'SITE', 'ASSETS_PREFIX', 'MODE', 'DEV', 'PROD', 'SSR']) delete process.env[key];
+  offerCheckedHandbook({ directory, workingDirectory: process.cwd(), fitCache }, handbook);
   const { build } = await import('astro');
   // Astro 5 stages a build whose output folder lies outside the working directory in <cwd>/.astro, imports the
   // staged pages from there (so Correlary's dependencies must resolve from it) and then copies that whole folder

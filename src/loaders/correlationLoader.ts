@@ -16,6 +16,7 @@ import { filesCodeVersion, fitCodeVersion } from '../load/fitCodeVersion.ts';
 import { writeCorrelationFiles } from './correlationFiles.ts';
 import { correlationFilesFolder } from './correlationFilesIntegration.ts';
 import { deferFiles } from './pendingFiles.ts';
+import { takeCheckedHandbook } from './checkedHandbook.ts';
 import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -34,8 +35,10 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
     directory: fileURLToPath(new URL('correlary-fits/', context.config.cacheDir)),
     version: fitCodeVersion(fileURLToPath(context.config.root)),
   };
-  // Many datasets not in the cache are fitted in worker threads; records no folder uses any more are deleted.
-  const handbook = await fitHandbook(displayDirectory, { fitCache, workers: { root: fileURLToPath(context.config.root) }, prune: true });
+  // `correlary build` has made this very pass already in this process (its check): take it rather than repeat it.
+  // Otherwise many datasets not in the cache are fitted in worker threads; records no folder uses any more are deleted.
+  const call = { directory: displayDirectory, workingDirectory: process.cwd(), fitCache };
+  const handbook = (context.watcher === undefined ? takeCheckedHandbook(call) : undefined) ?? (await fitHandbook(displayDirectory, { fitCache, workers: { root: fileURLToPath(context.config.root) }, prune: true }));
   // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
   const histories = await handbookHistory(displayDirectory, handbook.datasets);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];

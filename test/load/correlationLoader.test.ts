@@ -16,6 +16,9 @@ import { readHandbookSettings } from '../../src/load/index.ts';
 import { handbookSettingsSchema } from '../../src/schema/index.ts';
 import { copyCorrelationFiles, writeCorrelationFiles } from '../../src/loaders/correlationFiles.ts';
 import { filesWritten, startFiles } from '../../src/loaders/pendingFiles.ts';
+import { offerCheckedHandbook } from '../../src/loaders/checkedHandbook.ts';
+import { fitHandbook } from '../../src/load/fitHandbook.ts';
+import { fitCodeVersion } from '../../src/load/fitCodeVersion.ts';
 
 /** Astro's cache folder stand-in: the loader caches fits in it and the store refers to them. */
 const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-loader-cache-'));
@@ -52,6 +55,38 @@ describe('correlationLoader()', () => {
     expect(fitOf(data)?.order).toBe(1);
     expect(data.warnings.map((warning) => warning.line)).toEqual([10]);
     expect(logger.warn).toHaveBeenCalledTimes(1);
+  });
+
+  it("takes the check pass that `correlary build` offered for exactly this call, and reads the handbook itself otherwise", async () => {
+    const directory = 'test/fixtures/content/valid';
+    const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(process.cwd()) };
+    const checked = await fitHandbook(directory, { fitCache });
+    // Marked, so that using it shows: a title that no folder has.
+    const marked = {
+      ...checked,
+      datasets: checked.datasets.map((item, at) => {
+        const correlation = item.dataset.correlation!;
+        return at > 0 ? item : { ...item, dataset: { ...item.dataset, correlation: { ...correlation, meta: { ...correlation.meta, title: 'Offered by the check pass' } } } };
+      }),
+    };
+    const titles = async () => {
+      const { context, entries } = fakeContext();
+      await correlationLoader({ directory }).load(context);
+      await filesWritten();
+      return [...entries.values()].map((entry) => (entry.data as CorrelationEntry).meta.title);
+    };
+    offerCheckedHandbook({ directory, workingDirectory: process.cwd(), fitCache }, marked);
+    expect(await titles()).toContain('Offered by the check pass');
+    expect(await titles()).not.toContain('Offered by the check pass'); // taken once
+    // Another code version, working directory or content folder: the loader reads the handbook itself.
+    for (const call of [
+      { directory, workingDirectory: process.cwd(), fitCache: { ...fitCache, version: 'another' } },
+      { directory, workingDirectory: path.join(process.cwd(), 'src'), fitCache },
+      { directory: 'test/fixtures/content', workingDirectory: process.cwd(), fitCache },
+    ]) {
+      offerCheckedHandbook(call, marked);
+      expect(await titles()).not.toContain('Offered by the check pass');
+    }
   });
 
   it('the stored entry passes the collection schema unchanged (Astro re-validates it)', async () => {
