@@ -22,7 +22,7 @@
  */
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
 import { designRow } from './designMatrix.ts';
-import { rowTimes, solveLeading, type QrStorage } from './qrSolve.ts';
+import { rowTimes, scratchMatrix, solveLeading, type QrStorage } from './qrSolve.ts';
 import { domainMapFor, toUnit } from './domain.ts';
 import { curveFitOf, fitCurve } from './fitCurve.ts';
 import { uncertaintyProfile } from './stats/localUncertainty.ts';
@@ -91,7 +91,7 @@ export function fitCurves(data: FitData, options: Omit<FitOptions, 'order'>, ord
     norms.push(Math.sqrt(sum) || 1);
   }
   const scaledRows = rows.map((row) => row.map((value, j) => value / norms[j]!));
-  const qr = new QrDecomposition(new Matrix(scaledRows)) as unknown as QrStorage;
+  const qr = new QrDecomposition(scratchMatrix(scaledRows, columns)) as unknown as QrStorage;
   const factors = qr.QR.to2DArray();
   const target = v.map((value, i) => value * rootWeights[i]!);
   const profile = weighted ? uncertaintyProfile(data.x, weights.map((w) => 1 / Math.sqrt(w))) : null;

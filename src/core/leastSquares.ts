@@ -18,7 +18,7 @@
  */
 import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
 import { FitError } from './fitError.ts';
-import { rowTimes, solveLeading, type QrStorage } from './qrSolve.ts';
+import { orthogonalRows, rowTimes, scratchMatrix, solveLeading, type QrStorage } from './qrSolve.ts';
 
 export interface LinearSolution {
   /** Solution β (length p). */
@@ -105,7 +105,7 @@ export function solveLeastSquares(
     for (let j = 0; j < k; j++) row[j] = free.get(i, j) / norms[j]!;
     scaledRows.push(row);
   }
-  const qr = new QrDecomposition(n === 0 ? new Matrix(0, k) : new Matrix(scaledRows));
+  const qr = new QrDecomposition(scratchMatrix(scaledRows, k));
   const svd = new SingularValueDecomposition(qr.upperTriangularMatrix, { computeLeftSingularVectors: false });
   const singular = svd.diagonal;
   const largest = singular[0] ?? 0;
@@ -129,10 +129,10 @@ export function solveLeastSquares(
     const correction = solveLeading(factors, Rdiag, k, residual);
     solution = solution.map((value, j) => value + correction[j]!);
     z = solution.map((value, j) => value / norms[j]!);
-    const Q = qr.orthogonalMatrix;
-    leverage = Array.from({ length: n }, (_, i) => {
+    const Q = orthogonalRows(factors, k);
+    leverage = Q.map((row) => {
       let sum = 0;
-      for (let j = 0; j < k; j++) sum += Q.get(i, j) ** 2;
+      for (let j = 0; j < k; j++) sum += row[j]! ** 2;
       return sum;
     });
     // (AᵀA)⁻¹ of the scaled matrix from its SVD: V·Σ⁻²·Vᵀ, then unscale by the column norms.

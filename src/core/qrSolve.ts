@@ -6,7 +6,7 @@
  *
  * @example solveLeading(qr.QR.to2DArray(), qr.Rdiag, p, b) // => the first p entries of qr.solve(Matrix.columnVector(b))
  */
-import type { Matrix } from 'ml-matrix';
+import { Matrix } from 'ml-matrix';
 
 /** ml-matrix's QR keeps its Householder vectors and R above the diagonal in `QR`, the diagonal of R in `Rdiag`. */
 export interface QrStorage {
@@ -42,4 +42,40 @@ export function rowTimes(row: ArrayLike<number>, vector: readonly number[], p: n
   let s = 0;
   for (let k = 0; k < p; k++) s += row[k]! * vector[k]!;
   return s;
+}
+
+/**
+ * The thin orthogonal factor Q (rows × columns) of ml-matrix's QR from its stored reflectors, as plain rows: the
+ * loops of QrDecomposition's `orthogonalMatrix` in the same order (so the same numbers), without a Matrix whose every
+ * row is its own typed array.
+ * @example orthogonalRows(qr.QR.to2DArray(), qr.QR.columns) // => qr.orthogonalMatrix.to2DArray()
+ */
+export function orthogonalRows(qr: readonly ArrayLike<number>[], columns: number): number[][] {
+  const rows = qr.length;
+  const X = Array.from({ length: rows }, () => new Array<number>(columns).fill(0));
+  for (let k = columns - 1; k >= 0; k--) {
+    for (let i = 0; i < rows; i++) X[i]![k] = 0;
+    X[k]![k] = 1;
+    for (let j = k; j < columns; j++) {
+      if (qr[k]![k] !== 0) {
+        let s = 0;
+        for (let i = k; i < rows; i++) s += qr[i]![k]! * X[i]![j]!;
+        s = -s / qr[k]![k]!;
+        for (let i = k; i < rows; i++) X[i]![j] = X[i]![j]! + s * qr[i]![k]!;
+      }
+    }
+  }
+  return X;
+}
+
+/**
+ * A matrix made to be factored once and then dropped: its clone() is itself, so ml-matrix's QrDecomposition (which
+ * begins by copying its input, entry by entry through an iterator, into a new matrix of typed-array rows) factors it in
+ * place instead. The factorisation is the same code on the same numbers; only the copy is left out. Never let one
+ * out of the function that made it (its contents are the factors afterwards).
+ * @example new QrDecomposition(scratchMatrix(rows)) // same QR, Rdiag as new QrDecomposition(new Matrix(rows))
+ */
+export function scratchMatrix(rows: readonly (readonly number[])[], columns: number): Matrix {
+  const matrix = rows.length === 0 ? new Matrix(0, columns) : new Matrix(rows as number[][]);
+  return Object.defineProperty(matrix, 'clone', { value: () => matrix });
 }

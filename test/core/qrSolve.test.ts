@@ -1,11 +1,12 @@
 /**
- * The QR solve and product on plain arrays (src/core/qrSolve.ts) against ml-matrix's own QrDecomposition.solve and
- * Matrix.mmul, which they replace in solveLeastSquares and fitCurves: the same numbers bit for bit (not merely close),
+ * The QR solve, product and orthogonal factor on plain arrays, and the factorisation in place (src/core/qrSolve.ts),
+ * against ml-matrix's own QrDecomposition (solve, orthogonalMatrix, on a copy of its input) and Matrix.mmul, which
+ * they replace in solveLeastSquares, fitCurves and fitNestedOrders: the same numbers bit for bit (not merely close),
  * on random tall matrices with columns of very different sizes, including NIST StRD designs.
  */
 import { Matrix, QrDecomposition } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { rowTimes, solveLeading, type QrStorage } from '../../src/core/qrSolve.ts';
+import { orthogonalRows, rowTimes, scratchMatrix, solveLeading, type QrStorage } from '../../src/core/qrSolve.ts';
 import { createRandom } from '../../scripts/demo/random.ts';
 import { nistDatasets } from '../helpers/nist.ts';
 
@@ -27,6 +28,11 @@ function check(rows: number[][], b: number[]): void {
   const k = Math.max(1, p - 2);
   const leading = new QrDecomposition(new Matrix(rows.map((row) => row.slice(0, k))));
   expect(solveLeading(factors, Rdiag, k, b)).toEqual(leading.solve(Matrix.columnVector(b)).to1DArray());
+  expect(orthogonalRows(factors, p)).toEqual(qr.orthogonalMatrix.to2DArray());
+  // Factored in place (no copy of the input): the same factors.
+  const inPlace = new QrDecomposition(scratchMatrix(rows, p)) as unknown as QrStorage;
+  expect(inPlace.QR.to2DArray()).toEqual(factors);
+  expect([...inPlace.Rdiag]).toEqual([...Rdiag]);
   const vector = b.slice(0, p);
   expect(rows.map((row) => rowTimes(row, vector, p))).toEqual(new Matrix(rows).mmul(Matrix.columnVector(vector)).to1DArray());
 }

@@ -31,6 +31,7 @@
  */
 import { Matrix, QrDecomposition } from 'ml-matrix';
 import { domainMapFor } from '../domain.ts';
+import { orthogonalRows, scratchMatrix, type QrStorage } from '../qrSolve.ts';
 import { FitError } from '../fitError.ts';
 import type { DomainMap } from '../types.ts';
 
@@ -117,8 +118,9 @@ export function fitNestedOrders(u: readonly number[], v: readonly number[], opti
     weightedResponse.push(rowScale * v[i]!);
   }
 
-  const qr = new QrDecomposition(new Matrix(design));
-  const q = qr.orthogonalMatrix.to2DArray();
+  const qr = new QrDecomposition(scratchMatrix(design, columns));
+  // Q as plain rows, by the loops of ml-matrix's orthogonalMatrix (src/core/qrSolve.ts): the same numbers.
+  const q = orthogonalRows((qr as unknown as QrStorage).QR.to2DArray(), columns);
   const r = qr.upperTriangularMatrix.to2DArray();
   for (let c = 0; c < columns; c++) {
     if (r[c]![c] === 0) throw new FitError('order-too-high', `fitNestedOrders found a zero column at power ${c + firstPower}`);
