@@ -32,6 +32,14 @@ export function poolSize(jobs: number, minimum = POOL_MINIMUM_JOBS): number {
 }
 
 /**
+ * The fitting worker's bundle in `folder` (built when missing), or undefined when it cannot be built.
+ * @example await fitWorkerBundle(root, '.cache/correlary-worker') // => '.cache/correlary-worker/fit-worker-….mjs'
+ */
+export function fitWorkerBundle(root: string, folder: string): Promise<string | undefined> {
+  return workerBundle(path.join(root, 'src', 'load', 'fitWorker.ts'), 'fit-worker', sourcesVersion(root), folder);
+}
+
+/**
  * A pool of `size` workers, or undefined when none can be started (then the caller fits in its own thread).
  * @param root the package root holding src/load/fitWorker.ts
  * @param folder where the bundle is kept
@@ -41,7 +49,7 @@ export async function createFitPool(root: string, folder: string, size: number):
   if (size < 1) return undefined;
   // Named by every source it may be made of (sourcesVersion), not only by the fitting code's version: the bundle
   // also holds e.g. the message helpers fitDataset uses.
-  const bundle = await workerBundle(path.join(root, 'src', 'load', 'fitWorker.ts'), 'fit-worker', sourcesVersion(root), folder);
+  const bundle = await fitWorkerBundle(root, folder);
   if (bundle === undefined) return undefined;
   // The worker's protocol (src/load/fitWorker.ts): { id, correlation, directory, key } in, { id, fitted } out.
   const pool = createWorkerPool<{ correlation: LoadedCorrelation; directory: string; key: string }, { fitted: DatasetFit }>(bundle, size);

@@ -15,8 +15,22 @@ import path from 'node:path';
  * @param version a hex digest of the code the bundle is made of
  * @example await workerBundle('src/load/fitWorker.ts', 'fit-worker', fitCodeVersion('.'), '.cache/correlary-worker') // => '.cache/correlary-worker/fit-worker-1f2e….mjs'
  */
-export async function workerBundle(entry: string, prefix: string, version: string, folder: string): Promise<string | undefined> {
+export function workerBundle(entry: string, prefix: string, version: string, folder: string): Promise<string | undefined> {
   const target = path.join(folder, `${prefix}-${version.slice(0, 16)}.mjs`);
+  // One build per bundle at a time in this process: the build's integration starts building the bundles early
+  // (correlationFilesIntegration.ts) and the pools ask for them later, from other module instances.
+  const building = ((globalThis as Building)[BUILDING] ??= new Map<string, Promise<string | undefined>>());
+  const known = building.get(target);
+  if (known !== undefined) return known;
+  const made = buildBundle(entry, prefix, target, folder).finally(() => building.delete(target));
+  building.set(target, made);
+  return made;
+}
+
+const BUILDING = Symbol.for('correlary.workerBundlesBuilding');
+type Building = { [BUILDING]?: Map<string, Promise<string | undefined>> };
+
+async function buildBundle(entry: string, prefix: string, target: string, folder: string): Promise<string | undefined> {
   if (existsSync(target)) return target;
   if (!existsSync(entry)) return undefined;
   try {

@@ -44,13 +44,21 @@ export interface WriteFilesOptions {
 
 type FolderJob = { target: string; entry: CorrelationEntry; handbook: HandbookIdentity; digest: string };
 
+/**
+ * The files worker's bundle in `folder` (built when missing), or undefined when it cannot be built.
+ * @example await filesWorkerBundle(root, '.cache/correlary-worker') // => '.cache/correlary-worker/files-worker-….mjs'
+ */
+export function filesWorkerBundle(root: string, folder: string): Promise<string | undefined> {
+  return workerBundle(path.join(root, 'src', 'loaders', 'filesWorker.ts'), 'files-worker', sourcesVersion(root), folder);
+}
+
 /** A pool of files workers for `jobs` folders to write, or undefined (then they are written in this thread). */
 async function filesPool(jobs: number, options: WriteFilesOptions): Promise<WorkerPool<FolderJob, { files: number }> | undefined> {
   const workers = options.workers;
   if (workers === undefined) return undefined;
   const size = poolSize(jobs, workers.minimumJobs);
   if (size < 1) return undefined;
-  const bundle = await workerBundle(path.join(workers.root, 'src', 'loaders', 'filesWorker.ts'), 'files-worker', sourcesVersion(workers.root), workers.folder);
+  const bundle = await filesWorkerBundle(workers.root, workers.folder);
   return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size, 2);
 }
 

@@ -5,7 +5,8 @@
  */
 import { fileURLToPath } from 'node:url';
 import type { AstroIntegration } from 'astro';
-import { copyCorrelationFiles } from './correlationFiles.ts';
+import { copyCorrelationFiles, filesWorkerBundle } from './correlationFiles.ts';
+import { fitWorkerBundle } from '../load/fitPool.ts';
 import { beginFiles, filesWritten } from './pendingFiles.ts';
 
 /** Where the loader writes the files, inside Astro's cache folder. @example correlationFilesFolder(config.cacheDir) */
@@ -19,8 +20,16 @@ export function correlationFilesIntegration(): AstroIntegration {
   return {
     name: 'correlary-correlation-files',
     hooks: {
-      'astro:config:setup': ({ command, injectRoute }) => {
+      'astro:config:setup': ({ command, config, injectRoute }) => {
         if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('../routes/correlationFile.ts', import.meta.url)) });
+        // A build fits and writes files in worker threads run from bundles of their code: have esbuild make any
+        // missing bundle now, in its own process, while Astro starts up, rather than when the loader needs it.
+        if (command === 'build') {
+          const root = fileURLToPath(config.root);
+          const folder = fileURLToPath(new URL('correlary-worker/', config.cacheDir));
+          void fitWorkerBundle(root, folder);
+          void filesWorkerBundle(root, folder);
+        }
       },
       // The downloads the loader prepared start being written once Astro has synced the content and saved its store
       // (see pendingFiles.ts): the build starts after that. They are written while Astro bundles the code and
