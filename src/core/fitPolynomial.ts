@@ -23,7 +23,8 @@
  * @example fitPolynomial({ x: [0, 1, 2, 3], y: [1, 3, 5, 7] }, { order: 1 }).coefficients // => [1, 2]
  * @throws FitError when the data cannot support the requested fit (too few distinct x, rank deficiency, …)
  */
-import { designMatrix } from './designMatrix.ts';
+import { designRow } from './designMatrix.ts';
+import { scratchMatrix } from './qrSolve.ts';
 import { checkPoints, fullCheckValues, printedForm } from './checkValues.ts';
 import { mappedCovarianceToPower, mappedFromPowerExact, mappedToPower } from './convertBasis.ts';
 import { chiSquareUpperP, normalQuantile, tQuantile } from './distributions.ts';
@@ -192,7 +193,8 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
       looRmse: summary.looRmse,
       aicc: summary.aicc,
       bic: summary.bic,
-      conditionRaw: conditionNumber(designMatrix(u, powers, rootWeights)),
+      // The raw design (designMatrix's entries, as rows) is made only to be factored: in place (scratchMatrix).
+      conditionRaw: conditionNumber(scratchMatrix(u.map((value, i) => designRow(value, powers, rootWeights[i])), powers.length)),
       conditionMapped: conditionNumber(A),
       // Weighted by 1/σ², S_r is the χ² statistic and s² the reduced χ²: the same certified numbers as above.
       reducedChiSquare: weighted && dof > 0 ? residualStats.residualVariance : null,

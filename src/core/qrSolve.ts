@@ -76,6 +76,11 @@ export function orthogonalRows(qr: readonly ArrayLike<number>[], columns: number
  * @example new QrDecomposition(scratchMatrix(rows)) // same QR, Rdiag as new QrDecomposition(new Matrix(rows))
  */
 export function scratchMatrix(rows: readonly (readonly number[])[], columns: number): Matrix {
-  const matrix = rows.length === 0 ? new Matrix(0, columns) : new Matrix(rows as number[][]);
+  // Filled entry by entry (Matrix's constructor from arrays copies each row through an iterator, which costs more).
+  const matrix = new Matrix(rows.length, columns);
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i]!;
+    for (let j = 0; j < columns; j++) matrix.set(i, j, row[j]!);
+  }
   return Object.defineProperty(matrix, 'clone', { value: () => matrix });
 }
