@@ -133,10 +133,11 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
     betaGBeta += beta[j]! * rowSum;
   }
   // Integer-scaled S_r: S_r = srNum / det² · 10^(2·ev + ew)
-  const srNum = sumWVV * det * det - 2n * det * betaG + betaGBeta;
+  const detSquared = det * det;
+  const srNum = sumWVV * detSquared - 2n * det * betaG + betaGBeta;
   const dof = n - p + q;
   const residualScale = 2 * ev + scaledW.exponent;
-  const residualSumOfSquares = timesPowerOfTen(rational(srNum, det * det), residualScale);
+  const residualSumOfSquares = timesPowerOfTen(rational(srNum, detSquared), residualScale);
   const variance: Rational | null = dof > 0 ? rational(residualSumOfSquares.num, residualSumOfSquares.den * BigInt(dof)) : null;
 
   // Total sum of squares: centred Σ W (V − V̄)² = ΣWV² − (ΣWV)²/ΣW, or uncentred ΣWV² without intercept.
@@ -144,7 +145,7 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
   const totalDen = intercept ? sumW : 1n;
   // R² = 1 − S_r/S_t, both at the same integer scale (S_r·det² vs S_t·det²).
   const rSquared =
-    totalNum === 0n ? NaN : toNumber(rational(totalNum * det * det - srNum * totalDen, totalNum * det * det));
+    totalNum === 0n ? NaN : toNumber(rational(totalNum * detSquared - srNum * totalDen, totalNum * detSquared));
 
   // a_k = β_k · 10^(ev − k·eu); Cov(a_j, a_k) = s²·P_jk · 10^(−(j+k)·eu) · 10^(−ew) (P is in the W-scaled system).
   const coefficients = new Array(order + 1).fill(0);
@@ -156,6 +157,8 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
   const covarianceFactor: Rational | null = problem.covarianceScale === 'stated' ? rational(1n) : variance;
   const covariance: number[][] = Array.from({ length: order + 1 }, () => new Array(order + 1).fill(0));
   const standardErrors = new Array(order + 1).fill(0);
+  // The denominator every covariance entry shares before its power of ten: formed once.
+  const covarianceDenominator = covarianceFactor ? covarianceFactor.den * det : 1n;
   for (let j = 0; j < p; j++) {
     exactCoefficients[powers[j]!] = rational(beta[j]! * 10n ** BigInt(ev - powers[j]! * eu - lowestExponent), commonDenominator);
     coefficients[powers[j]!] = toNumber(exactCoefficients[powers[j]!]!);
@@ -164,7 +167,7 @@ export function exactLeastSquares(problem: ExactProblem): ExactResult | null {
     for (let k = 0; k <= j; k++) {
       const entry = covarianceFactor
         ? timesPowerOfTen(
-            rational(covarianceFactor.num * solution.numerators[j]![1 + k]!, covarianceFactor.den * det),
+            rational(covarianceFactor.num * solution.numerators[j]![1 + k]!, covarianceDenominator),
             -(powers[j]! + powers[k]!) * eu - scaledW.exponent,
           )
         : null;
