@@ -9,16 +9,34 @@
 import { CHART_COLORS, CHART_LAYOUT } from './chartLayout.ts';
 import { fitChartScales } from './fitChartScales.ts';
 import { svgBandPath as bandPath, svgLinePath as linePath } from './svgPaths.ts';
-import type { FitChartData } from './chartTypes.ts';
+import type { FitChartData, PointRow } from './chartTypes.ts';
+import type { ChartScales } from './chartScales.ts';
 import { escapeXml } from './escapeXml.ts';
 import { c, svgAxes as axes } from './svgAxes.ts';
 import { residualBandRows } from './residualBandRows.ts';
 
-/** Dots as one path of zero-length round-capped segments: a tenth of the bytes of one circle per point. */
-function dots(points: readonly (readonly [number, number])[], color: string, diameter: number): string {
-  if (points.length === 0) return '';
-  const d = points.map(([px, py]) => `M${c(px)},${c(py)}h0`).join('');
-  return `<path d="${d}" stroke="${color}" stroke-width="${diameter}" stroke-linecap="round" fill="none"/>`;
+type Scale = ChartScales['x'];
+
+/**
+ * Dots as one path of zero-length round-capped segments: a tenth of the bytes of one circle per point. The points
+ * are the rows whose columns `xColumn` and `yColumn` are finite (all for the data, those with a residual below),
+ * placed by the scales `x` and `y`.
+ */
+function dots(rows: readonly PointRow[], x: Scale, y: Scale, yColumn: 2 | 3, color: string, diameter: number): string {
+  let d = '';
+  for (const row of rows) {
+    const value = row[yColumn];
+    if (yColumn === 3 && !Number.isFinite(value)) continue;
+    d += `M${c(x(row[1]))},${c(y(value))}h0`;
+  }
+  return d === '' ? '' : `<path d="${d}" stroke="${color}" stroke-width="${diameter}" stroke-linecap="round" fill="none"/>`;
+}
+
+/** The ± uncertainty bars of the rows that have them, as one path's data. */
+function bars(rows: readonly PointRow[], x: Scale, y: Scale): string {
+  let d = '';
+  for (const p of rows) if (p.length === 6) d += `M${c(x(p[1]))},${c(y(p[4]))}V${c(y(p[5]))}`;
+  return d;
 }
 
 export interface RenderFitSvgOptions {
@@ -37,18 +55,15 @@ export function renderFitSvg(data: FitChartData, options: RenderFitSvgOptions = 
   const { x, y, residual } = fitChartScales(data);
   const level = Math.round(data.confidence * 100);
   const title = options.title ?? `Data and fitted curve with ${level} % confidence and prediction bands, and the residuals below`;
-  const bars = data.points
-    .filter((p) => p.length === 6)
-    .map((p) => `M${c(x(p[1]))},${c(y(p[4]!))}V${c(y(p[5]!))}`)
-    .join('');
+  const barPath = bars(data.points, x, y);
   const residualRows = residualBandRows(data.curve);
   const main = [
     `<path d="${bandPath(data.curve, x, y, 4, 5)}" fill="${CHART_COLORS.prediction}"/>`,
     `<path d="${bandPath(data.curve, x, y, 2, 3)}" fill="${CHART_COLORS.confidence}"/>`,
     axes(x, y, mainHeight, data.xLabel, data.yLabel, 6),
     `<path d="${linePath(data.curve, x, y, 1)}" fill="none" stroke="${CHART_COLORS.curve}" stroke-width="2"/>`,
-    bars === '' ? '' : `<path d="${bars}" stroke="${CHART_COLORS.point}" stroke-width="1" fill="none"/>`,
-    dots(data.points.map((p) => [x(p[1]), y(p[2])]), CHART_COLORS.point, 6),
+    barPath === '' ? '' : `<path d="${barPath}" stroke="${CHART_COLORS.point}" stroke-width="1" fill="none"/>`,
+    dots(data.points, x, y, 2, CHART_COLORS.point, 6),
     ...data.excluded.map((p) => `<circle cx="${c(x(p.x))}" cy="${c(y(p.y))}" r="4.5" fill="none" stroke="${CHART_COLORS.excluded}" stroke-width="1.5"><title>row ${p.row} left out: ${escapeXml(p.reason)}</title></circle>`),
   ].join('');
   const zero = c(residual(0));
@@ -57,7 +72,7 @@ export function renderFitSvg(data: FitChartData, options: RenderFitSvgOptions = 
     `<path d="${bandPath(residualRows, x, residual, 1, 2)}" fill="${CHART_COLORS.confidence}"/>`,
     axes(x, residual, residualHeight, data.xLabel, data.residualLabel, 4),
     `<line x1="${margin.left}" x2="${width - margin.right}" y1="${zero}" y2="${zero}" stroke="${CHART_COLORS.zero}" stroke-dasharray="4 3"/>`,
-    dots(data.points.filter((p) => Number.isFinite(p[3])).map((p) => [x(p[1]), residual(p[3])]), CHART_COLORS.point, 6),
+    dots(data.points, x, residual, 3, CHART_COLORS.point, 6),
   ].join('');
   const height = mainHeight + residualHeight;
   return (

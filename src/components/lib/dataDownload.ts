@@ -6,11 +6,11 @@
  */
 import { cautionsFor } from '../../core/index.ts';
 import { spreadsheetSafeText, type HandbookIdentity } from '../../export/index.ts';
-import { dataRows } from './dataRows.ts';
 import { INVENTED_NOTICE, pointsOf, unitSuffix, type CorrelationEntry, type PolynomialFit } from './entryView.ts';
 
 /** Quote a CSV field when it needs it (RFC 4180); neutralise a leading formula character in text. */
 function textField(text: string): string {
+  if (text === '') return ''; // most rows have no reason and no note
   const safe = spreadsheetSafeText(text);
   return /[",\r\n']/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
@@ -43,26 +43,20 @@ export function dataCsv(entry: CorrelationEntry, fit: PolynomialFit, handbook?: 
   lines.push(comment(`Source: ${meta.source.citation}`));
   lines.push(comment(`Diagnostics of the order-${fit.order} fit: residual = y - fitted y [${meta.property.unit}]; empty for rows left out`));
   lines.push('row,line,x,y,uncertainty,used,residual,studentized,leverage,cooks_distance,excluded_reason,note');
-  const byRow = new Map(dataRows(entry, fit).map((row) => [row.point.row, row]));
+  // The rows of dataRows (the points used, in file order, the i-th with the fit's i-th diagnostics), written as the
+  // points are walked rather than looked up by row number.
   const excluded = new Map(entry.excluded.map((point) => [point.row, point.reason]));
+  const { residualsOriginal, studentized, leverage, cooksDistance } = fit.points;
+  let used = 0;
+  let text = `${lines.join('\n')}\n`;
   for (const point of pointsOf(entry)) {
-    const row = byRow.get(point.row);
-    lines.push(
-      [
-        String(point.row),
-        String(point.line),
-        String(point.x),
-        String(point.y),
-        numberField(point.uncertainty),
-        row ? 'yes' : 'no',
-        numberField(row?.residual),
-        numberField(row?.studentized),
-        numberField(row?.leverage),
-        numberField(row?.cook),
-        textField(excluded.get(point.row) ?? ''),
-        textField(point.note ?? ''),
-      ].join(','),
-    );
+    const reason = excluded.get(point.row);
+    const start = `${point.row},${point.line},${point.x},${point.y},${numberField(point.uncertainty)},`;
+    const diagnostics =
+      reason === undefined
+        ? `yes,${numberField(residualsOriginal[used])},${numberField(studentized[used])},${numberField(leverage[used])},${numberField(cooksDistance[used++])}`
+        : 'no,,,,';
+    text += `${start}${diagnostics},${textField(reason ?? '')},${textField(point.note ?? '')}\n`;
   }
-  return `${lines.join('\n')}\n`;
+  return text;
 }
