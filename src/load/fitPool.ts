@@ -9,13 +9,14 @@
 import os from 'node:os';
 import path from 'node:path';
 import type { DatasetFit } from './fitDataset.ts';
+import { readCachedSummary } from './fitCache.ts';
 import type { LoadedCorrelation } from './types.ts';
 import { sourcesVersion } from './fitCodeVersion.ts';
 import { workerBundle } from './workerBundle.ts';
 import { createWorkerPool } from './workerPool.ts';
 
 export interface FitPool {
-  /** Fit one correlation in a worker, which also writes its cache record under `key` in `directory`. */
+  /** Fit one correlation in a worker, which writes its cache record under `key` in `directory`; the fit as a cache hit reads it. */
   fit(correlation: LoadedCorrelation, directory: string, key: string): Promise<DatasetFit>;
   /** Stop the workers. */
   close(): Promise<void>;
@@ -51,10 +52,18 @@ export async function createFitPool(root: string, folder: string, size: number):
   // also holds e.g. the message helpers fitDataset uses.
   const bundle = await fitWorkerBundle(root, folder);
   if (bundle === undefined) return undefined;
-  // The worker's protocol (src/load/fitWorker.ts): { id, correlation, directory, key } in, { id, fitted } out.
-  const pool = createWorkerPool<{ correlation: LoadedCorrelation; directory: string; key: string }, { fitted: DatasetFit }>(bundle, size);
+  // The worker's protocol (src/load/fitWorker.ts): { id, correlation, directory, key } in, { id } out once the
+  // record is written. The fit is then read from the record's summary, exactly as a cache hit is: the large arrays
+  // (per-point statistics, the order table) are read only if something asks for them, instead of being copied
+  // back from the worker for every dataset.
+  const pool = createWorkerPool<{ correlation: LoadedCorrelation; directory: string; key: string }, object>(bundle, size);
   return {
-    fit: async (correlation, directory, key) => (await pool.run({ correlation, directory, key })).fitted,
+    fit: async (correlation, directory, key) => {
+      await pool.run({ correlation, directory, key });
+      const fitted = readCachedSummary(directory, key);
+      if (fitted === undefined) throw new Error(`the fitting worker wrote no readable record ${key} in ${directory}`);
+      return fitted;
+    },
     close: () => pool.close(),
   };
 }
