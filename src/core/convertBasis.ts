@@ -94,8 +94,11 @@ export function substituteAffineExact(coefficients: readonly Rational[], offset:
 
 /** Matrix S (rows j, columns k) with c = S·a for q(s) = p(offset + factor·s): C(k,j)·offset^(k−j)·factor^j, k ≥ j. */
 function substitutionMatrix(offset: Rational, factor: Rational, size: number): Rational[][] {
+  // The powers of offset and factor, each formed once (the same rationals power() gives).
+  const offsetPowers = Array.from({ length: size }, (_, e) => power(offset, e));
+  const factorPowers = Array.from({ length: size }, (_, e) => power(factor, e));
   return Array.from({ length: size }, (_, j) =>
-    Array.from({ length: size }, (_, k) => (k < j ? rational(0n) : multiply(rational(binomial(k, j)), multiply(power(offset, k - j), power(factor, j))))),
+    Array.from({ length: size }, (_, k) => (k < j ? rational(0n) : multiply(rational(binomial(k, j)), multiply(offsetPowers[k - j]!, factorPowers[j]!)))),
   );
 }
 

@@ -104,13 +104,9 @@ export function fitPolynomial(data: FitData, options: FitOptions): PolynomialFit
   // observation at each x — the local stated σ (scaled as the band is) for a weighted fit, s otherwise.
   const uncertaintyModel = weighted && options.uncertaintyModel ? { relative: options.uncertaintyModel.relative } : null;
   const mappedForm = { map, coefficients: mappedCoefficients, covariance: mappedCovariance };
-  const localAt = (x: number) =>
-    profile === null
-      ? unweightedSd
-      : localUncertainty(
-          { uncertaintyProfile: profile, uncertaintyScale, uncertaintyModel, transformX, transformY, mapped: mappedForm, range, order, statistics: { residualStdDev: residualStats.residualStdDev } as PolynomialFit['statistics'] },
-          x,
-        );
+  // The fit as localUncertainty reads it, made once (the digits rule and the scales' checks ask at many x).
+  const localFit = { uncertaintyProfile: profile, uncertaintyScale, uncertaintyModel, transformX, transformY, mapped: mappedForm, range, order, statistics: { residualStdDev: residualStats.residualStdDev } as PolynomialFit['statistics'] };
+  const localAt = (x: number) => (profile === null ? unweightedSd : localUncertainty(localFit, x));
   const digitTolerance = (uValue: number) => Math.max(0.01 * (localAt(inverseX(transformX, uValue)) || 0), floor);
 
   const partial = { transformX, transformY, mapped: { map, coefficients: mappedCoefficients, covariance: mappedCovariance }, range, order };
