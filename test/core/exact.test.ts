@@ -53,7 +53,7 @@ describe('decimal reading', () => {
   it('decimalParts gives the value of the shortest round-trip decimal, as Python reads repr(x)', () => {
     // Doubles of every size and sign, written with and without an exponent by String(); independent reading:
     // Python's Fraction(repr(x)) (repr is also the shortest decimal that reads back to x).
-    const values = [0, 5e-324, 1.7976931348623157e308, 123456789012345680000, 1e21, 1e-7, 0.000001, 273.15, -459.67, 1 / 3, -2 / 7];
+    const values = [0, -42, 9007199254740991, 9007199254740992, 5e-324, 1.7976931348623157e308, 123456789012345680000, 1e21, 1e-7, 0.000001, 273.15, -459.67, 1 / 3, -2 / 7];
     for (let i = 0; i < 60; i++) values.push((i % 2 ? -1 : 1) * Math.sin(i + 1) * 10 ** ((i % 41) - 20));
     const ours = values.map((value) => {
       const { digits, exponent } = decimalParts(value);

@@ -27,6 +27,8 @@ const DECIMAL = /^(-?)(\d+)(?:\.(\d+))?(?:e([+-]\d+))?$/;
 /** Split a finite double into signed integer digits and a power-of-ten exponent. @example decimalParts(-12.5) // => { digits: -125n, exponent: -1 } */
 export function decimalParts(value: number): DecimalParts {
   if (!Number.isFinite(value)) throw new Error(`decimalParts requires a finite number, got ${value}`);
+  // A safe integer prints as its plain digits (below 1e21 String uses no exponent): the same parts, without the text.
+  if (Number.isSafeInteger(value)) return { digits: BigInt(value), exponent: 0 };
   const text = String(value);
   // Without an exponent (the usual case) the text is [-]digits[.digits]: its digits without the point, and the
   // number of digits after it (BigInt reads the sign and ignores leading zeros). Otherwise the full pattern below.
