@@ -25,7 +25,11 @@ export function jsonNumbers(value: unknown): JsonValue {
   if (Array.isArray(value)) return value.map(jsonNumbers);
   if (typeof value === 'object') {
     const result: { [key: string]: JsonValue } = {};
-    for (const [key, entry] of Object.entries(value)) if (entry !== undefined) result[key] = jsonNumbers(entry);
+    // Object.keys, not Object.entries: the same own enumerable keys in the same order, without a pair per key.
+    for (const key of Object.keys(value)) {
+      const entry = (value as Record<string, unknown>)[key];
+      if (entry !== undefined) result[key] = jsonNumbers(entry);
+    }
     return result;
   }
   return null;

@@ -9,6 +9,7 @@ import { CHART_COLORS } from './chartLayout.ts';
 import { svgLinePath as linePath } from './svgPaths.ts';
 import { paddedExtent } from './chartScales.ts';
 import { escapeXml } from './escapeXml.ts';
+import { roundForChart } from './roundForChart.ts';
 import { c } from './svgAxes.ts';
 
 export interface OrderStatPanel {
@@ -22,8 +23,9 @@ export interface OrderStatPanel {
 
 const PANEL = { width: 190, height: 130, left: 46, right: 10, top: 22, bottom: 26 } as const;
 
+/** Three significant digits: String(Number(value.toPrecision(3))), through roundForChart's arithmetic. */
 function short(value: number): string {
-  return String(Number(value.toPrecision(3)));
+  return String(roundForChart(value, 3) ?? Number(value.toPrecision(3)));
 }
 
 /**

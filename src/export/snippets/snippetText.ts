@@ -7,11 +7,15 @@
  */
 import type { SnippetSource } from './snippetSource.ts';
 
-/** Shortest round-trip decimal of a double (parses back to the same double in C, Python, JavaScript). */
+/**
+ * Shortest round-trip decimal of a double (parses back to the same double in C, Python, JavaScript), with ".0"
+ * after a whole number so that it reads as a floating-point literal. String writes a point or an exponent for every
+ * value but a whole number below 10^21 (ECMA-262 Number::toString), so that is when ".0" is added.
+ */
 export function literal(value: number | null): string {
   if (value === null || !Number.isFinite(value)) throw new Error(`snippet literal requires a finite number; got ${value}`);
   const text = String(value);
-  return /[.eE]/.test(text) ? text : `${text}.0`;
+  return Number.isInteger(value) && Math.abs(value) < 1e21 ? `${text}.0` : text;
 }
 
 /** One line of comment text: control characters and Unicode line/paragraph separators replaced by spaces. */
