@@ -144,17 +144,21 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
     }
     fittingWhileReading += performance.now() - begun;
   };
-  const handbook = await readHandbook(directory, { onDataset });
-  const readEnded = performance.now();
-  // Fewer folders to fit than it takes to start workers: here.
-  if (waiting.length > 0) refitStarted ??= performance.now();
-  for (const item of waiting.splice(0)) {
-    item.fitted = fitHere(item.correlation!, cache, item.key);
-    progress();
-  }
+  let handbook: Awaited<ReturnType<typeof readHandbook>>;
+  let readEnded: number;
   try {
+    handbook = await readHandbook(directory, { onDataset });
+    readEnded = performance.now();
+    // Fewer folders to fit than it takes to start workers: here.
+    if (waiting.length > 0) refitStarted ??= performance.now();
+    for (const item of waiting.splice(0)) {
+      item.fitted = fitHere(item.correlation!, cache, item.key);
+      progress();
+    }
     await Promise.all([...items.values()].map((item) => item.work));
   } finally {
+    // Also when reading failed part way: workers already started would keep the process alive.
+    await Promise.allSettled([...items.values()].map((item) => item.work));
     await (await pool)?.close();
   }
   const refittingMs = refitStarted === undefined ? 0 : performance.now() - refitStarted;
