@@ -10,9 +10,10 @@
  * nothing here asserts a time.
  *
  * With `--baseline DIR` (another checkout's root, e.g. `git archive main src package.json | tar -x -C DIR` with
- * node_modules linked) every folder is also built by that checkout's code, passes alternating, so before and after
- * are measured in the same run under the same load; every file of every folder (the page parts as the JSON text
- * written) is compared between the two and the number of identical files is printed.
+ * node_modules linked) every folder is also built by that checkout's code, so that before and after are measured in
+ * the same run under the same load: in the first pass folder by folder (each folder's files, the page parts as the
+ * JSON text written, are compared between the two, and the number of identical files is printed), then pass by pass,
+ * alternating.
  *
  * The first pass is the one a build makes (each correlation once, after a warm-up on 50 other correlations); later
  * passes find memos (texHtml's KaTeX markup) filled by the earlier ones, so they flatter code that memoizes.
@@ -107,17 +108,52 @@ interface Job {
 }
 
 /** One pass over every folder: wall ms per phase, and CPU and wall ms of the pass. */
-function pass(code: Code, jobs: readonly Job[], kept?: File[][]): Figures {
+function pass(code: Code, jobs: readonly Job[]): Figures {
   const figures: Figures = { files: 0, parts: 0, cpu: 0, wall: 0 };
   const wallStart = performance.now();
   const cpuStart = cpuMs();
-  jobs.forEach(({ entry, handbook }, i) => {
-    const files = folder(code, entry, handbook, figures);
-    if (kept) kept[i] = files;
-  });
+  for (const { entry, handbook } of jobs) folder(code, entry, handbook, figures);
   figures.cpu = cpuMs() - cpuStart;
   figures.wall = performance.now() - wallStart;
   return figures;
+}
+
+/** How the files of the checkouts compared in the first pass. */
+interface Comparison {
+  total: number;
+  identical: number;
+  differing: Map<string, number>;
+}
+
+/**
+ * The first pass: every folder built by each checkout in turn (which goes first alternates), its files compared and
+ * dropped (kept, they would make every later collection slower), CPU and wall ms counted per folder and checkout.
+ */
+function firstPass(codes: readonly Code[], jobs: readonly Job[]): { figures: Map<string, Figures>; comparison: Comparison } {
+  const figures = new Map(codes.map((code) => [code.name, { files: 0, parts: 0, cpu: 0, wall: 0 } as Figures]));
+  const comparison: Comparison = { total: 0, identical: 0, differing: new Map() };
+  jobs.forEach(({ entry, handbook }, i) => {
+    const built = new Map<string, File[]>();
+    for (const code of i % 2 === 0 ? codes : [...codes].reverse()) {
+      const mine = figures.get(code.name)!;
+      const wallStart = performance.now();
+      const cpuStart = cpuMs();
+      built.set(code.name, folder(code, entry, handbook, mine));
+      mine.cpu += cpuMs() - cpuStart;
+      mine.wall += performance.now() - wallStart;
+    }
+    const before = built.get('baseline');
+    const after = built.get('current');
+    if (before === undefined || after === undefined) return;
+    const theirs = new Map(after.map((file) => [file.file, file.text]));
+    for (const name of new Set([...before.map((file) => file.file), ...theirs.keys()])) {
+      comparison.total++;
+      const text = before.find((file) => file.file === name)?.text;
+      if (text !== undefined && text === theirs.get(name)) comparison.identical++;
+      else comparison.differing.set(name, (comparison.differing.get(name) ?? 0) + 1);
+    }
+  });
+  return { figures, comparison };
 }
 
 /** The stored entries of the handbook, made as src/loaders/correlationLoader.ts makes them, with their identities. */
@@ -183,16 +219,12 @@ async function main(): Promise<void> {
     if (only !== 'baseline') codes.push(await load('current', repository));
     console.log(`bench:files: ${jobs.length} folders of synthetic correlations (seed ${seed}; fitted in ${fitSeconds.toFixed(1)} s), one thread, node ${process.version}`);
 
-    // Warm-up on other correlations, then keep the files of every folder (first pass) to compare them.
+    // Warm-up on other correlations; the first pass compares the files; then the other passes, alternating.
     for (const code of codes) pass(code, warmUp);
-    const folders = new Map<string, File[][]>();
-    const results = new Map<string, Figures[]>(codes.map((code) => [code.name, []]));
-    for (let round = 0; round < passes; round++) {
-      for (const code of round % 2 === 0 ? codes : [...codes].reverse()) {
-        const kept: File[][] | undefined = round === 0 && codes.length > 1 ? [] : undefined;
-        results.get(code.name)!.push(pass(code, jobs, kept));
-        if (kept) folders.set(code.name, kept);
-      }
+    const first = firstPass(codes, jobs);
+    const results = new Map<string, Figures[]>(codes.map((code) => [code.name, [first.figures.get(code.name)!]]));
+    for (let round = 1; round < passes; round++) {
+      for (const code of round % 2 === 0 ? codes : [...codes].reverse()) results.get(code.name)!.push(pass(code, jobs));
     }
     console.log('| code | pass | correlationFiles s | pageParts s | pass CPU s | pass wall s | CPU ms per correlation |');
     console.log('|---|---:|---:|---:|---:|---:|---:|');
@@ -202,27 +234,13 @@ async function main(): Promise<void> {
       });
     }
     if (results.has('baseline') && results.has('current')) {
-      const first = (name: string) => results.get(name)![0]!.cpu;
+      const firstCpu = (name: string) => results.get(name)![0]!.cpu;
       const best = (name: string) => Math.min(...results.get(name)!.map((figures) => figures.cpu));
       const perCorrelation = (ms: number) => (ms / jobs.length).toFixed(2);
       // The first pass is what a build does (each correlation once); later passes find memos filled by earlier ones.
-      console.log(`CPU ms per correlation, first pass: baseline ${perCorrelation(first('baseline'))}, current ${perCorrelation(first('current'))}; ratio ${(first('current') / first('baseline')).toFixed(3)}`);
+      console.log(`CPU ms per correlation, first pass: baseline ${perCorrelation(firstCpu('baseline'))}, current ${perCorrelation(firstCpu('current'))}; ratio ${(firstCpu('current') / firstCpu('baseline')).toFixed(3)}`);
       console.log(`CPU ms per correlation, best pass: baseline ${perCorrelation(best('baseline'))}, current ${perCorrelation(best('current'))}; ratio ${(best('current') / best('baseline')).toFixed(3)}`);
-      const before = folders.get('baseline')!;
-      const after = folders.get('current')!;
-      let total = 0;
-      let identical = 0;
-      const differing = new Map<string, number>();
-      before.forEach((files, i) => {
-        const theirs = new Map(after[i]!.map((file) => [file.file, file.text]));
-        const names = new Set([...files.map((file) => file.file), ...theirs.keys()]);
-        for (const name of names) {
-          total++;
-          const mine = files.find((file) => file.file === name)?.text;
-          if (mine !== undefined && mine === theirs.get(name)) identical++;
-          else differing.set(name, (differing.get(name) ?? 0) + 1);
-        }
-      });
+      const { total, identical, differing } = first.comparison;
       console.log(`files identical to the baseline's: ${identical} of ${total}`);
       if (differing.size > 0) console.log(`differing, by file name: ${[...differing].map(([name, n]) => `${name} ${n}`).join(', ')}`);
     }
