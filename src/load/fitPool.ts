@@ -56,7 +56,9 @@ export async function createFitPool(root: string, folder: string, size: number):
   // record is written. The fit is then read from the record's summary, exactly as a cache hit is: the large arrays
   // (per-point statistics, the order table) are read only if something asks for them, instead of being copied
   // back from the worker for every dataset.
-  const pool = createWorkerPool<{ correlation: LoadedCorrelation; directory: string; key: string }, object>(bundle, size);
+  // Eight jobs handed to each worker at a time: while folders are still being read, the loader's thread may be busy
+  // for a while before it hands out the next one, and a worker should not wait for it.
+  const pool = createWorkerPool<{ correlation: LoadedCorrelation; directory: string; key: string }, object>(bundle, size, 8);
   return {
     fit: async (correlation, directory, key) => {
       await pool.run({ correlation, directory, key });

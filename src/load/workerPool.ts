@@ -16,8 +16,9 @@ export interface WorkerPool<Job extends object, Result extends object> {
 /**
  * @param bundle the worker's bundled code (workerBundle)
  * @param size how many workers (at least one)
- * @param jobsPerWorker how many jobs each worker is given at once (default 1); more than one for jobs that wait on
- *   files, so that one job's computing overlaps another's writing
+ * @param jobsPerWorker how many jobs each worker is given at once (default 1); more than one when the thread that
+ *   hands them out may be busy with other work for a while (the loader reading folders, Astro rendering pages), so
+ *   that a worker that finishes a job finds the next one already queued
  * @example const pool = createWorkerPool<{ n: number }, { square: number }>(bundle, 2); await pool.run({ n: 3 }) // => { square: 9 }
  */
 export function createWorkerPool<Job extends object, Result extends object>(bundle: string, size: number, jobsPerWorker = 1): WorkerPool<Job, Result> {

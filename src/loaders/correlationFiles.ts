@@ -59,7 +59,9 @@ async function filesPool(jobs: number, options: WriteFilesOptions): Promise<Work
   const size = poolSize(jobs, workers.minimumJobs);
   if (size < 1) return undefined;
   const bundle = await filesWorkerBundle(workers.root, workers.folder);
-  return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size, 2);
+  // Eight folders handed to each worker at a time: while the pages render, the main thread may be busy for a while
+  // before it hands out the next one, and a worker should not wait for it.
+  return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size, 8);
 }
 
 /** Run `work` on every item, at most `limit` at a time. */
