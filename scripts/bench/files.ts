@@ -27,7 +27,7 @@ import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { writeSyntheticHandbook } from './build/syntheticHandbook.ts';
 import { benchOption } from './options.ts';
-import type { CorrelationEntry, StoredHistory } from '../../src/schema/index.ts';
+import type { CorrelationEntry } from '../../src/schema/index.ts';
 import type { HandbookIdentity } from '../../src/export/index.ts';
 
 const repository = fileURLToPath(new URL('../..', import.meta.url));
@@ -163,33 +163,16 @@ async function storedJobs(content: string, cacheDirectory: string): Promise<Job[
   const { fitCodeVersion } = (await import(src('load', 'fitCodeVersion.ts'))) as typeof import('../../src/load/fitCodeVersion.ts');
   const { correlationEntrySchema, handbookSettingsSchema } = (await import(src('schema', 'index.ts'))) as typeof import('../../src/schema/index.ts');
   const { identityOf } = (await import(src('components', 'lib', 'identityOf.ts'))) as typeof import('../../src/components/lib/identityOf.ts');
+  const { storedEntry } = (await import(src('loaders', 'storedEntry.ts'))) as typeof import('../../src/loaders/storedEntry.ts');
   const fitCache = { directory: cacheDirectory, version: fitCodeVersion(repository) };
   const handbook = await fitHandbook(content, { fitCache });
   const histories = await handbookHistory(content, handbook.datasets);
   // The site address and base path of astro.config.mjs: the settings' (bench:build sets no override).
   const settings = (await readHandbookSettings(content)).settings ?? handbookSettingsSchema.parse({});
   const jobs: Job[] = [];
-  for (const { dataset, fitted, review } of handbook.datasets) {
-    const correlation = dataset.correlation;
-    if (correlation === undefined || fitted === undefined || review === undefined) continue;
-    const reference = fitted.cacheKey === undefined ? undefined : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } };
-    const entry = {
-      slug: correlation.slug,
-      meta: correlation.meta,
-      points: reference ?? [...correlation.points],
-      excluded: [...correlation.excluded],
-      dataRange: correlation.dataRange,
-      range: correlation.range,
-      warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
-      fit: fitted.fit === undefined || reference === undefined ? null : reference,
-      orderSelection: fitted.selection === undefined || reference === undefined ? null : reference,
-      reviewTrail: {
-        fingerprint: review.fingerprint?.text ?? null,
-        approval: review.approval.state,
-        lapseReasons: review.approval.state === 'lapsed' ? [...review.approval.reasons] : [],
-      },
-      history: histories.get(correlation.slug) as StoredHistory | undefined,
-    };
+  for (const item of handbook.datasets) {
+    const entry = storedEntry(item, fitCache.directory, histories);
+    if (entry === undefined) continue;
     // context.parseData validates it by the collection's schema; the worker gets a structured clone.
     const stored = structuredClone(correlationEntrySchema.parse(entry));
     if (stored.fit === null) continue; // writeCorrelationFiles writes folders of fitted entries only

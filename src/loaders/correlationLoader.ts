@@ -17,7 +17,8 @@ import { writeCorrelationFiles } from './correlationFiles.ts';
 import { correlationFilesFolder } from './correlationFilesIntegration.ts';
 import { deferFiles } from './pendingFiles.ts';
 import { takeCheckedHandbook } from './checkedHandbook.ts';
-import type { CorrelationEntry, StoredHistory } from '../schema/index.ts';
+import { storedEntry } from './storedEntry.ts';
+import type { CorrelationEntry } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
   /**
@@ -42,29 +43,10 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
   const histories = await handbookHistory(displayDirectory, handbook.datasets);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
-  for (const { dataset, fitted, review } of handbook.datasets) {
-    const correlation = dataset.correlation;
-    if (correlation === undefined || fitted === undefined || review === undefined) continue;
-    // Large parts (the fit, its order table and previews, the data rows) stay in the fit cache; the store refers to
-    // them, so that Astro's store, the module it is bundled into and every getCollection copy stay small.
-    const reference = fitted.cacheKey === undefined ? undefined : { fitCache: { directory: fitCache.directory, key: fitted.cacheKey } };
-    const entry: CorrelationEntry = {
-      slug: correlation.slug,
-      meta: correlation.meta,
-      points: reference ?? [...correlation.points],
-      excluded: [...correlation.excluded],
-      dataRange: correlation.dataRange,
-      range: correlation.range,
-      warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
-      fit: fitted.fit === undefined || reference === undefined ? null : reference,
-      orderSelection: fitted.selection === undefined || reference === undefined ? null : reference,
-      reviewTrail: {
-        fingerprint: review.fingerprint?.text ?? null,
-        approval: review.approval.state,
-        lapseReasons: review.approval.state === 'lapsed' ? [...review.approval.reasons] : [],
-      },
-      history: histories.get(correlation.slug) as StoredHistory | undefined,
-    };
+  for (const item of handbook.datasets) {
+    const entry = storedEntry(item, fitCache.directory, histories);
+    const correlation = item.dataset.correlation;
+    if (entry === undefined || correlation === undefined) continue;
     entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(correlation.metadataPath)) });
   }
 
