@@ -11,7 +11,7 @@ import { mkdir, mkdtemp, readdir, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { fitHandbook, formatDiagnostic } from '../load/index.ts';
-import { fitCodeVersion } from '../load/fitCodeVersion.ts';
+import { fitCodeVersion, readingCodeVersion } from '../load/fitCodeVersion.ts';
 import { offerCheckedHandbook } from '../loaders/checkedHandbook.ts';
 import { CliError } from './cliError.ts';
 import { createProgress } from './progress.ts';
@@ -76,7 +76,8 @@ export async function runBuild(args: string[]): Promise<number> {
   // Read as the content loader names it (relative to the working directory), so that the loader can take this pass
   // instead of making it again (src/loaders/checkedHandbook.ts).
   const directory = path.relative(process.cwd(), content) || '.';
-  const handbook = await fitHandbook(directory, { fitCache, workers: { root: packageRoot() }, prune: true, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
+  const folderRecords = { directory: path.join(cacheDir, 'correlary-folders'), version: readingCodeVersion(packageRoot()) };
+  const handbook = await fitHandbook(directory, { fitCache, folderRecords, workers: { root: packageRoot() }, prune: true, onFitted: (done, total) => progress.update(`read and fitted ${done} of ${total} correlations`) });
   progress.done();
   const errors = handbook.diagnostics.filter((diagnostic) => diagnostic.severity === 'error');
   if (errors.length > 0) {
@@ -130,7 +131,7 @@ export async function runBuild(args: string[]): Promise<number> {
     if (outside) process.chdir(workingDirectory);
     if (staging !== undefined) await rm(staging, { recursive: true, force: true });
   }
-  const count = handbook.datasets.filter((dataset) => dataset.fitted?.fit !== undefined).length;
+  const count = handbook.datasets.filter((dataset) => dataset.fitted?.outcome?.fit ?? dataset.fitted?.fit !== undefined).length;
   const pages = (await readdir(out, { recursive: true })).filter((name) => name.endsWith('.html')).length;
   console.log(`built ${count} correlation${count === 1 ? '' : 's'} from ${options.content} into ${options.out}: ${pages} pages in ${progress.elapsed()} s`);
   return 0;

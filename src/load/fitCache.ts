@@ -21,7 +21,7 @@
  * fit equals a fresh one.
  */
 import { createHash } from 'node:crypto';
-import { mkdirSync, readFileSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
 import type { OrderSelection, PolynomialFit } from '../core/index.ts';
@@ -204,6 +204,14 @@ export function readCachedSummary(directory: string, key: string): DatasetFit | 
     selection: lazy(summary.selection, 'orders', () => record().selection!.orders),
     diagnostics: summary.diagnostics,
   };
+}
+
+/**
+ * Whether the cache holds a record under `key` (without reading it).
+ * @example hasCachedFit(cache.directory, key) // => true
+ */
+export function hasCachedFit(directory: string, key: string): boolean {
+  return existsSync(fileOf(directory, key));
 }
 
 /** The cached record under `key`, or undefined when there is none (or it cannot be read). */

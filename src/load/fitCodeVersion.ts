@@ -8,6 +8,7 @@
  */
 import { createHash } from 'node:crypto';
 import { readFileSync, readdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import path from 'node:path';
 
 function sourceFiles(folder: string): string[] {
@@ -87,6 +88,45 @@ export function sourcesVersion(packageRoot: string): string {
       hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');
     } catch {
       // not shipped
+    }
+  }
+  return hash.digest('hex');
+}
+
+/** The version of an installed package as found from `packageRoot`, or "unknown". */
+function installedVersion(packageRoot: string, name: string): string {
+  try {
+    // The package's entry point, then up to the folder named after it (its package.json need not be exported).
+    let folder = path.dirname(createRequire(path.join(packageRoot, 'package.json')).resolve(name));
+    while (path.basename(folder) !== name && path.dirname(folder) !== folder) folder = path.dirname(folder);
+    return String((JSON.parse(readFileSync(path.join(folder, 'package.json'), 'utf8')) as { version?: string }).version);
+  } catch {
+    return 'unknown';
+  }
+}
+
+/**
+ * The version of the code that reads and validates a correlation folder, for the folder records
+ * (src/load/folderRecord.ts): SHA-256 of the package version, of every source file under src/load, src/schema and
+ * src/core (what reading, validating and the review trail run), of the installed versions of the parsers and the
+ * validator they use (yaml, csv-parse, zod) and of the JavaScript engine (records are written with node:v8's
+ * serializer). A change to any of them makes every folder be read afresh.
+ * @example readingCodeVersion('.').length // => 64
+ */
+export function readingCodeVersion(packageRoot: string): string {
+  const hash = createHash('sha256');
+  try {
+    hash.update(String((JSON.parse(readFileSync(path.join(packageRoot, 'package.json'), 'utf8')) as { version?: string }).version));
+  } catch {
+    hash.update('unknown');
+  }
+  hash.update('\0').update(`node ${process.version} v8 ${process.versions.v8}`);
+  for (const name of ['yaml', 'csv-parse', 'zod']) hash.update('\0').update(`${name}@${installedVersion(packageRoot, name)}`);
+  for (const file of ['load', 'schema', 'core'].flatMap((folder) => sourceFiles(path.join(packageRoot, 'src', folder)))) {
+    try {
+      hash.update(path.relative(packageRoot, file)).update('\0').update(readFileSync(file)).update('\0');
+    } catch {
+      // not shipped: the package version stands for it
     }
   }
   return hash.digest('hex');

@@ -15,6 +15,11 @@ export interface DatasetFit {
   readonly diagnostics: readonly Diagnostic[];
   /** Key of this result in the fit cache, when it went through one (src/load/fitCache.ts). */
   readonly cacheKey?: string;
+  /**
+   * Whether `fit` and `selection` are defined, when that is known without reading them: an unchanged folder's fit
+   * is read from the fit cache only when something asks for it (src/load/fitHandbook.ts).
+   */
+  readonly outcome?: { readonly fit: boolean; readonly selection: boolean };
 }
 
 /** Turn a FitError into a message at the data line of its point, or at fit.order in the metadata. */

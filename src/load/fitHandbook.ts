@@ -5,14 +5,17 @@
  */
 import path from 'node:path';
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
-import { fitCacheKey, pruneFitCache, readCachedSummary, writeCachedFit, type FitCache } from './fitCache.ts';
+import { fitCacheKey, hasCachedFit, pruneFitCache, readCachedSummary, writeCachedFit, type FitCache } from './fitCache.ts';
+import { folderRecordKey, pruneFolderRecords, readFolderRecord, writeFolderRecord, type FitFacts } from './folderRecord.ts';
 import { cacheRecord } from './cacheRecord.ts';
 import { createFitPool, POOL_MINIMUM_JOBS, poolSize, type FitPool } from './fitPool.ts';
 import { readHandbook } from './readHandbook.ts';
 import { sortDiagnostics, type Diagnostic } from './diagnostic.ts';
+import type { FolderRead } from './readDataset.ts';
 import type { DatasetResult, LoadedCorrelation } from './types.ts';
 import { SLUG_PATTERN } from '../schema/index.ts';
 import { reviewDiagnostics, reviewTrail, type ReviewTrail } from './review/reviewTrail.ts';
+import { approvalState } from './review/approvalState.ts';
 
 export interface FittedDataset {
   readonly dataset: DatasetResult;
@@ -49,7 +52,13 @@ export interface FitHandbookOptions {
    * workers. Without it, or when no worker can start, everything is fitted in this thread.
    */
   readonly workers?: { readonly root: string; readonly minimumJobs?: number };
-  /** With a fit cache: afterwards, delete the cache records of this cache that no folder of this handbook uses. */
+  /**
+   * Keep a record of each folder's reading and fitting in this folder, under this version of the reading code
+   * (readingCodeVersion), and take an unchanged folder from its record rather than parsing, validating and looking
+   * its fit up again (src/load/folderRecord.ts). Used only with a fit cache.
+   */
+  readonly folderRecords?: { readonly directory: string; readonly version: string };
+  /** With a fit cache: afterwards, delete the cache records (and folder records) that no folder of this handbook uses. */
   readonly prune?: boolean;
 }
 
@@ -59,6 +68,43 @@ function fromCache(correlation: LoadedCorrelation, cache: FitCache): { key: stri
   // Only the small summary: the per-point statistics and the order table are read when something asks for them.
   const hit = readCachedSummary(cache.directory, key);
   return { key, ...(hit === undefined ? {} : { fitted: { ...hit, cacheKey: key } }) };
+}
+
+/**
+ * An unchanged folder's fit from its folder record: the messages and whether there is a fit are known; the fit and
+ * the order selection are read from the fit cache's summary only when something asks for them.
+ */
+function recordedFit(directory: string, facts: FitFacts): DatasetFit {
+  let summary: DatasetFit | undefined;
+  const read = (): DatasetFit => {
+    summary ??= readCachedSummary(directory, facts.key);
+    if (summary === undefined) throw new Error(`fitHandbook requires the cached fit ${facts.key} in ${directory}; it is missing (was the cache folder removed during the build?)`);
+    return summary;
+  };
+  const fitted = { diagnostics: facts.diagnostics, cacheKey: facts.key, outcome: { fit: facts.fit, selection: facts.selection } };
+  return Object.defineProperties(fitted, {
+    fit: { enumerable: true, get: () => (facts.fit ? read().fit : undefined) },
+    selection: { enumerable: true, get: () => (facts.selection ? read().selection : undefined) },
+  }) as DatasetFit;
+}
+
+/**
+ * Write a folder's record when it was read from its files (or its record lacked the fit facts it now has): the
+ * result of reading it and, when it was fitted and its review trail made, what fitting it gave.
+ */
+function recordFolder(directory: string, item: Item, version: string, fitted: DatasetFit | undefined, review: ReviewTrail | undefined): void {
+  const sources = item.folderRead?.sources;
+  if (sources === undefined || item.recordKey === undefined || item.facts !== undefined) return;
+  const facts: FitFacts | undefined =
+    fitted === undefined || review === undefined || item.key === undefined
+      ? undefined
+      : { version, key: item.key, diagnostics: fitted.diagnostics, fit: fitted.fit !== undefined, selection: fitted.selection !== undefined, fingerprint: review.fingerprint };
+  if (item.folderRead!.reused && facts === undefined) return; // the record holds nothing more
+  try {
+    writeFolderRecord(directory, item.recordKey, { ...sources, result: item.read, ...(facts === undefined ? {} : { fit: facts }) });
+  } catch {
+    // a read-only cache: the next build reads the folder afresh
+  }
 }
 
 /** Fit in this thread, writing the cache record when there is a cache. */
@@ -76,6 +122,11 @@ interface Item {
   readonly key: string | undefined;
   /** Read from the fit cache rather than fitted. */
   readonly cached: boolean;
+  /** How the folder was read, and its record's key, when folder records are kept. */
+  readonly folderRead: FolderRead | undefined;
+  readonly recordKey: string | undefined;
+  /** The folder record's fit facts, when they stood for the fit (an unchanged folder). */
+  readonly facts: FitFacts | undefined;
   fitted: DatasetFit | undefined;
   /** The fit under way in a worker (or here, when no worker could start). */
   work?: Promise<void>;
@@ -106,6 +157,19 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
   let refitStarted: number | undefined;
   let pool: Promise<FitPool | undefined> | undefined;
   const waiting: Item[] = [];
+  const records = cache === undefined ? undefined : options.folderRecords;
+  const recordKeys = new Map<string, string>();
+  const known =
+    records === undefined
+      ? undefined
+      : (folder: string) => {
+          const key = folderRecordKey(records.version, folder);
+          recordKeys.set(folder, key);
+          const record = readFolderRecord(records.directory, key);
+          if (record?.fit !== undefined) recordedFacts.set(folder, record.fit);
+          return record;
+        };
+  const recordedFacts = new Map<string, FitFacts>();
   const fitInPool = (item: Item) => {
     item.work = pool!.then(async (ready) => {
       let fitted: DatasetFit | undefined;
@@ -120,13 +184,25 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
       progress();
     });
   };
-  const onDataset = (read: DatasetResult, folders: number) => {
+  const onDataset = (read: DatasetResult, folders: number, folderRead: FolderRead) => {
     const begun = performance.now();
     total = folders;
     // A folder with errors of its own is not fitted; neither is one whose name is not a slug (readHandbook says so).
     const correlation = SLUG_PATTERN.test(read.slug) ? read.correlation : undefined;
-    const cached = correlation === undefined || cache === undefined ? undefined : fromCache(correlation, cache);
-    const item: Item = { read, correlation, key: cached?.key, cached: cached?.fitted !== undefined, fitted: cached?.fitted };
+    // An unchanged folder whose record holds its fit under this fitting code: neither a cache key nor a look-up.
+    const recorded = folderRead.reused && records !== undefined ? recordedFacts.get(read.folder) : undefined;
+    const facts = recorded !== undefined && correlation !== undefined && recorded.version === cache!.version && hasCachedFit(cache!.directory, recorded.key) ? recorded : undefined;
+    const cached = facts !== undefined ? { key: facts.key, fitted: recordedFit(cache!.directory, facts) } : correlation === undefined || cache === undefined ? undefined : fromCache(correlation, cache);
+    const item: Item = {
+      read,
+      correlation,
+      key: cached?.key,
+      cached: cached?.fitted !== undefined,
+      fitted: cached?.fitted,
+      folderRead: records === undefined ? undefined : folderRead,
+      recordKey: recordKeys.get(read.folder),
+      facts,
+    };
     items.set(read.folder, item);
     if (item.fitted !== undefined) progress();
     else if (correlation !== undefined) {
@@ -147,7 +223,7 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
   let handbook: Awaited<ReturnType<typeof readHandbook>>;
   let readEnded: number;
   try {
-    handbook = await readHandbook(directory, { onDataset });
+    handbook = await readHandbook(directory, { onDataset, ...(known === undefined ? {} : { known }) });
     readEnded = performance.now();
     // Fewer folders to fit than it takes to start workers: here.
     if (waiting.length > 0) refitStarted ??= performance.now();
@@ -182,11 +258,21 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
     if (correlation !== undefined && item.cached) cachedFits++;
     diagnostics.push(...read.diagnostics);
     if (fitted) diagnostics.push(...fitted.diagnostics);
-    const review = fitted === undefined || correlation === undefined ? undefined : reviewTrail(correlation, fitted.fit);
+    // An unchanged folder's fingerprint is the recorded one (the same correlation and fit make the same one).
+    const review =
+      fitted === undefined || correlation === undefined
+        ? undefined
+        : item.facts !== undefined
+          ? { fingerprint: item.facts.fingerprint, approval: approvalState(correlation.meta.review, item.facts.fingerprint) }
+          : reviewTrail(correlation, fitted.fit);
     if (review !== undefined && correlation !== undefined) diagnostics.push(...reviewDiagnostics(correlation, review, slugs));
     datasets.push({ dataset, fitted, review });
+    if (records !== undefined) recordFolder(records.directory, item, cache!.version, fitted, review);
   }
-  if (cache !== undefined && options.prune) pruneFitCache(cache.directory, keys);
+  if (cache !== undefined && options.prune) {
+    pruneFitCache(cache.directory, keys);
+    if (records !== undefined) pruneFolderRecords(records.directory, new Set(recordKeys.values()));
+  }
   const ended = performance.now();
   const readingMs = readEnded - started - fittingWhileReading;
   return { datasets, diagnostics: sortDiagnostics(diagnostics), timing: { readingMs, fittingMs: ended - started - readingMs, refittingMs }, cachedFits };

@@ -7,6 +7,7 @@ import path from 'node:path';
 import { METADATA_FILE } from '../schema/index.ts';
 import { error, hasErrors, sortDiagnostics, type Diagnostic } from './diagnostic.ts';
 import { checkDataset } from './checkDataset.ts';
+import { bytesHash, type FolderRecord, type FolderSources } from './folderRecord.ts';
 import { DATA_FILE_LIMIT_BYTES, MESSAGES_PER_FILE, METADATA_FILE_LIMIT_BYTES } from './limits.ts';
 import { readCsv } from './readCsv.ts';
 import { readMetadata } from './readMetadata.ts';
@@ -30,12 +31,32 @@ function capPerFile(diagnostics: readonly Diagnostic[]): Diagnostic[] {
   return kept;
 }
 
+/** What readFolder gives: the result, the hashes of the files it was made from, and where it came from. */
+export interface FolderRead {
+  readonly result: DatasetResult;
+  /** The hashes of both files, when both were read (a result that stopped earlier has none and is not recorded). */
+  readonly sources: FolderSources | undefined;
+  /** True when the result is the record's (`known`), both files being byte for byte those it was made from. */
+  readonly reused: boolean;
+}
+
 /**
  * Read one correlation folder.
  * @param folder path of the folder as it should appear in messages (relative or absolute)
  * @throws Error `readDataset requires a directory` when `folder` is not one (a programming error, not a user's)
  */
 export async function readDataset(folder: string): Promise<DatasetResult> {
+  return (await readFolder(folder)).result;
+}
+
+/**
+ * Read one correlation folder as readDataset does, given what an earlier read of the same folder path recorded
+ * (src/load/folderRecord.ts). Every file-system check is made and both files are read as in a fresh read; when
+ * their bytes are the recorded ones, the recorded result is returned instead of parsing and validating them again
+ * (the result is a function of those bytes and the path). Anything else reads the folder afresh.
+ * @example (await readFolder('content/corvane-cp', record)).reused // => true when neither file changed
+ */
+export async function readFolder(folder: string, known?: FolderRecord): Promise<FolderRead> {
   const info = await stat(folder).catch(() => undefined);
   if (info === undefined || !info.isDirectory()) throw new Error('readDataset requires a directory');
   const absoluteFolder = path.resolve(folder);
@@ -43,13 +64,11 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
   const folderSlug = path.basename(absoluteFolder);
   const diagnostics: Diagnostic[] = [];
   let slugLine = 1;
-  const done = (slug: string, correlation?: DatasetResult['correlation']): DatasetResult => ({
-    slug,
-    folder,
-    metadataPath,
-    slugLine,
-    correlation,
-    diagnostics: capPerFile(sortDiagnostics(diagnostics)),
+  let sources: FolderSources | undefined;
+  const done = (slug: string, correlation?: DatasetResult['correlation']): FolderRead => ({
+    result: { slug, folder, metadataPath, slugLine, correlation, diagnostics: capPerFile(sortDiagnostics(diagnostics)) },
+    sources,
+    reused: false,
   });
 
   // Metadata.
@@ -76,6 +95,15 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
     diagnostics.push(metadataText.diagnostic);
     return done(folderSlug);
   }
+  const metadataHash = bytesHash(metadataText.bytes);
+  if (known !== undefined && known.metadata === metadataHash) {
+    // The same metadata names the same data file: read it as below; the same bytes give the recorded result.
+    const knownData = await resolveDataFile(absoluteFolder, known.dataFile);
+    const knownText = knownData.ok ? await readText(knownData.absolutePath, path.join(folder, known.dataFile), DATA_FILE_LIMIT_BYTES) : undefined;
+    if (knownText?.ok && bytesHash(knownText.bytes) === known.data) {
+      return { result: known.result, sources: { metadata: known.metadata, dataFile: known.dataFile, data: known.data }, reused: true };
+    }
+  }
   const metadata = readMetadata(metadataText.text, metadataPath);
   diagnostics.push(...metadata.diagnostics);
   const slug = metadata.meta?.slug ?? folderSlug;
@@ -94,6 +122,7 @@ export async function readDataset(folder: string): Promise<DatasetResult> {
     diagnostics.push(dataText.diagnostic);
     return done(slug);
   }
+  sources = { metadata: metadataHash, dataFile, data: bytesHash(dataText.bytes) };
   const csv = readCsv(dataText.text, dataPath);
   diagnostics.push(...csv.diagnostics);
   if (csv.table === undefined) return done(slug);

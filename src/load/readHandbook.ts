@@ -6,7 +6,8 @@ import { readdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { SLUG_PATTERN } from '../schema/index.ts';
 import { error, type Diagnostic } from './diagnostic.ts';
-import { readDataset } from './readDataset.ts';
+import type { FolderRecord } from './folderRecord.ts';
+import { readFolder, type FolderRead } from './readDataset.ts';
 import { readHandbookSettings, type HandbookSettingsResult } from './readHandbookSettings.ts';
 import type { DatasetResult } from './types.ts';
 
@@ -25,7 +26,12 @@ export interface ReadHandbookOptions {
    * are: fitHandbook starts fitting while the other folders are still being read. Problems that concern several
    * folders (duplicate slugs) are only known from the result.
    */
-  readonly onDataset?: (dataset: DatasetResult, folders: number) => void;
+  readonly onDataset?: (dataset: DatasetResult, folders: number, read: FolderRead) => void;
+  /**
+   * What an earlier read recorded for a folder path (src/load/folderRecord.ts), used when neither of its files
+   * changed (readFolder). Called as each folder's reading starts.
+   */
+  readonly known?: (folder: string) => FolderRecord | undefined;
 }
 
 /**
@@ -43,9 +49,10 @@ export async function readHandbook(directory: string, options: ReadHandbookOptio
     .sort();
   const datasets = await Promise.all(
     folders.map(async (name) => {
-      const dataset = await readDataset(path.join(directory, name));
-      options.onDataset?.(dataset, folders.length);
-      return dataset;
+      const folder = path.join(directory, name);
+      const read = await readFolder(folder, options.known?.(folder));
+      options.onDataset?.(read.result, folders.length, read);
+      return read.result;
     }),
   );
   const settings = await readHandbookSettings(directory);

@@ -6,7 +6,8 @@ import { readFile, stat } from 'node:fs/promises';
 import { error, type Diagnostic } from './diagnostic.ts';
 import { formatBytes } from './limits.ts';
 
-export type ReadTextResult = { ok: true; text: string } | { ok: false; diagnostic: Diagnostic };
+/** `bytes` is the file as read (what the folder records are keyed by, src/load/folderRecord.ts). */
+export type ReadTextResult = { ok: true; text: string; bytes: Buffer } | { ok: false; diagnostic: Diagnostic };
 
 /**
  * Read `absolutePath` as UTF-8 text when it is at most `limitBytes` long; `displayPath` names it in messages.
@@ -27,6 +28,8 @@ export async function readText(absolutePath: string, displayPath: string, limitB
       ),
     };
   }
-  const text = await readFile(absolutePath, 'utf8');
-  return { ok: true, text: text.charCodeAt(0) === 0xfeff ? text.slice(1) : text };
+  // Decoded as readFile(path, 'utf8') decodes (the same UTF-8 decoder), keeping the bytes.
+  const bytes = await readFile(absolutePath);
+  const text = bytes.toString('utf8');
+  return { ok: true, text: text.charCodeAt(0) === 0xfeff ? text.slice(1) : text, bytes };
 }

@@ -12,7 +12,7 @@ import type { Loader, LoaderContext } from 'astro/loaders';
 import { fitHandbook, formatDiagnostic, handbookHistory, readHandbookSettings } from '../load/index.ts';
 import { identityOf } from '../components/lib/identityOf.ts';
 import { handbookSettingsSchema } from '../schema/index.ts';
-import { filesCodeVersion, fitCodeVersion } from '../load/fitCodeVersion.ts';
+import { filesCodeVersion, fitCodeVersion, readingCodeVersion } from '../load/fitCodeVersion.ts';
 import { writeCorrelationFiles } from './correlationFiles.ts';
 import { correlationFilesFolder } from './correlationFilesIntegration.ts';
 import { deferFiles } from './pendingFiles.ts';
@@ -39,7 +39,11 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   // `correlary build` has made this very pass already in this process (its check): take it rather than repeat it.
   // Otherwise many datasets not in the cache are fitted in worker threads; records no folder uses any more are deleted.
   const call = { directory: displayDirectory, workingDirectory: process.cwd(), fitCache };
-  const handbook = (context.watcher === undefined ? takeCheckedHandbook(call) : undefined) ?? (await fitHandbook(displayDirectory, { fitCache, workers: { root: fileURLToPath(context.config.root) }, prune: true }));
+  // Each folder's reading and fitting is recorded, so that an unchanged folder is neither parsed nor validated again.
+  const folderRecords = { directory: fileURLToPath(new URL('correlary-folders/', context.config.cacheDir)), version: readingCodeVersion(fileURLToPath(context.config.root)) };
+  const handbook =
+    (context.watcher === undefined ? takeCheckedHandbook(call) : undefined) ??
+    (await fitHandbook(displayDirectory, { fitCache, folderRecords, workers: { root: fileURLToPath(context.config.root) }, prune: true }));
   // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
   const histories = await handbookHistory(displayDirectory, handbook.datasets);
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];

@@ -18,6 +18,9 @@ export function storedEntry(item: FittedDataset, fitCacheDirectory: string, hist
   const correlation = dataset.correlation;
   if (correlation === undefined || fitted === undefined || review === undefined) return undefined;
   const reference = fitted.cacheKey === undefined ? undefined : { fitCache: { directory: fitCacheDirectory, key: fitted.cacheKey } };
+  // Known without reading the fit where the handbook pass says so (an unchanged folder's fit is read when asked for).
+  const hasFit = fitted.outcome?.fit ?? fitted.fit !== undefined;
+  const hasSelection = fitted.outcome?.selection ?? fitted.selection !== undefined;
   return {
     slug: correlation.slug,
     meta: correlation.meta,
@@ -26,8 +29,8 @@ export function storedEntry(item: FittedDataset, fitCacheDirectory: string, hist
     dataRange: correlation.dataRange,
     range: correlation.range,
     warnings: [...correlation.warnings, ...fitted.diagnostics.filter((diagnostic) => diagnostic.severity === 'warning')],
-    fit: fitted.fit === undefined || reference === undefined ? null : reference,
-    orderSelection: fitted.selection === undefined || reference === undefined ? null : reference,
+    fit: !hasFit || reference === undefined ? null : reference,
+    orderSelection: !hasSelection || reference === undefined ? null : reference,
     reviewTrail: {
       fingerprint: review.fingerprint?.text ?? null,
       approval: review.approval.state,

@@ -107,7 +107,10 @@ export async function handbookHistory(directory: string, datasets: readonly Fitt
   for (const { item, all, examined } of plans) {
     const slug = item.dataset.slug;
     const current = item.dataset.correlation;
-    const currentFit = item.fitted?.fit;
+    // Whether there is a fit, known without reading it: an unchanged folder's fit is read from the fit cache only
+    // when something asks for it (below, when the coefficients are compared with an approved version).
+    const fittedNow = item.fitted;
+    const hasFit = fittedNow !== undefined && (fittedNow.outcome?.fit ?? fittedNow.fit !== undefined);
     const currentFingerprint = item.review?.fingerprint;
     // Working-tree blob ids of the files the current version reads, to recognise it among the commits.
     const diskIds = new Map<string, string>();
@@ -120,8 +123,14 @@ export async function handbookHistory(directory: string, datasets: readonly Fitt
     const sameAsDisk = (snapshot: Snapshot) => diskIds.size > 0 && [...diskIds].every(([name, id]) => snapshot.files.get(name) === id);
     const versionOf = (snapshot: Snapshot): FittedVersion | undefined => {
       if (snapshot.files.size === 0) return undefined;
-      if (sameAsDisk(snapshot) && current !== undefined && currentFit !== undefined && currentFingerprint !== undefined) {
-        return { correlation: current, fit: currentFit, fingerprint: currentFingerprint };
+      if (sameAsDisk(snapshot) && current !== undefined && hasFit && currentFingerprint !== undefined) {
+        return {
+          correlation: current,
+          get fit() {
+            return fittedNow!.fit!;
+          },
+          fingerprint: currentFingerprint,
+        };
       }
       const metadataBlob = snapshot.files.get('correlation.yaml');
       const key = [...snapshot.files].map(([name, id]) => `${name}=${id}`).sort().join('\n');
@@ -153,14 +162,14 @@ export async function handbookHistory(directory: string, datasets: readonly Fitt
 
     let sinceApproval: SinceApproval | null = null;
     const approved = current?.meta.review.fingerprint;
-    if (item.review?.approval.state === 'lapsed' && approved !== undefined && current !== undefined && currentFit !== undefined) {
+    if (item.review?.approval.state === 'lapsed' && approved !== undefined && current !== undefined && hasFit) {
       const index = versions.findIndex((version) => version?.fingerprint.text === approved);
       const version = versions[index];
       const snapshot = examined[index];
       sinceApproval =
         version === undefined || snapshot === undefined
           ? { found: false }
-          : { found: true, commit: snapshot.hash.slice(0, 12), date: snapshot.date, changes: whatChanged(version, { correlation: current, fit: currentFit }) };
+          : { found: true, commit: snapshot.hash.slice(0, 12), date: snapshot.date, changes: whatChanged(version, { correlation: current, fit: fittedNow!.fit! }) };
     }
     histories.set(slug, { available: true, rows, older: Math.max(0, all.length - HISTORY_VERSIONS), uncommitted, sinceApproval });
   }
