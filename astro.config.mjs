@@ -9,10 +9,12 @@
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'astro/config';
-import { basePathSchema, siteUrlSchema } from './src/schema/index.ts';
-import { contentDirectory, formatDiagnostic, readHandbookSettings } from './src/load/index.ts';
-import { correlationFilesIntegration } from './src/loaders/correlationFilesIntegration.ts';
-import { dataStoreIntegration } from './src/loaders/dataStoreIntegration.ts';
+import { configModules } from './src/loaders/configModules.mjs';
+
+// Correlary's TypeScript sources come as one bundle that Node imports directly (src/loaders/configModules.mjs says
+// why); src/content.config.ts takes the same modules.
+const { basePathSchema, contentDirectory, correlationFilesIntegration, dataStoreIntegration, formatDiagnostic, readHandbookSettings, siteUrlSchema } =
+  await configModules();
 
 // A BASE_URL in the environment (test runners set one) would replace import.meta.env.BASE_URL in the pages and
 // point every link at the wrong base path; the base path comes from the settings below, never from there.
@@ -21,8 +23,10 @@ delete process.env.BASE_URL;
 const root = fileURLToPath(new URL('.', import.meta.url));
 const content = path.relative(process.cwd(), path.resolve(root, contentDirectory())) || '.';
 const { settings, diagnostics } = await readHandbookSettings(content);
+// The problems go into the error rather than above it: Astro retries a configuration that fails under Node through
+// Vite, which would print them a second time.
+if (settings === undefined) throw new Error(`the handbook settings file has ${diagnostics.length} problem(s):\n${diagnostics.map(formatDiagnostic).join('\n')}`);
 for (const problem of diagnostics) console.error(formatDiagnostic(problem));
-if (settings === undefined) throw new Error(`the handbook settings file has ${diagnostics.length} problem(s); see the lines above`);
 
 /** An override from the environment, checked like the settings file would be. */
 function override(name, schema) {

@@ -1,11 +1,10 @@
 // Astro content collections, read from the content directory (`content`, or the one CORRELARY_CONTENT names):
-// the correlations, and the handbook's settings file as a one-entry collection.
+// the correlations, and the handbook's settings file as a one-entry collection. The loaders and schemas are those
+// astro.config.mjs has loaded already, as one bundle (src/loaders/configModules.mjs says why).
 import { defineCollection } from 'astro:content';
-import { contentDirectory } from './load/contentDirectory.ts';
-import { correlationLoader } from './loaders/correlationLoader.ts';
-import { handbookSettingsLoader } from './loaders/handbookSettingsLoader.ts';
-import { correlationEntrySchema, handbookSettingsSchema } from './schema/index.ts';
+import { configModules } from './loaders/configModules.mjs';
 
+const { contentDirectory, correlationEntrySchema, correlationLoader, handbookSettingsLoader, handbookSettingsSchema } = await configModules();
 const directory = contentDirectory();
 
 export const collections = {

@@ -95,6 +95,23 @@ describe('architecture', () => {
     expect(offenders).toEqual([]);
   });
 
+  it('astro.config.mjs and src/content.config.ts reach src/ only through src/loaders/configModules.mjs, which imports no TypeScript file statically', () => {
+    // Node imports astro.config.mjs itself only when no TypeScript file is on the way; otherwise Astro loads it
+    // through Vite's module runner, which transforms every file behind the loaders (configModules.mjs says why).
+    const offenders: string[] = [];
+    const files = { 'astro.config.mjs': './src/loaders/configModules.mjs', 'src/content.config.ts': './loaders/configModules.mjs' };
+    for (const [file, door] of Object.entries(files)) {
+      for (const spec of importsOf(join(root, file))) {
+        if (spec.startsWith('.') && spec !== door) offenders.push(`${file} imports ${spec}`);
+      }
+    }
+    const text = readFileSync(join(root, 'src/loaders/configModules.mjs'), 'utf8');
+    for (const match of text.matchAll(/^import[^'"]*['"]([^'"]+)['"]/gm)) {
+      if (!match[1]!.startsWith('node:')) offenders.push(`src/loaders/configModules.mjs imports ${match[1]}`);
+    }
+    expect(offenders).toEqual([]);
+  });
+
   it('src/client reaches src/render only through files that do not import the core', () => {
     const offenders: string[] = [];
     for (const file of sourceFiles(join(root, 'src/client'))) {

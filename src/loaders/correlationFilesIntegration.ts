@@ -21,7 +21,8 @@ export function correlationFilesIntegration(): AstroIntegration {
     name: 'correlary-correlation-files',
     hooks: {
       'astro:config:setup': ({ command, config, injectRoute }) => {
-        if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('../routes/correlationFile.ts', import.meta.url)) });
+        // From the project root, not from this file: it runs from a bundle in node_modules/.cache (configModules.mjs).
+        if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('src/routes/correlationFile.ts', config.root)) });
         // A build fits and writes files in worker threads run from bundles of their code: have esbuild make any
         // missing bundle now, in its own process, while Astro starts up, rather than when the loader needs it.
         if (command === 'build') {
