@@ -2,7 +2,7 @@
  * Read and validate one correlation folder: metadata, data file and the checks that need both.
  * Every problem in both files is collected; nothing in the folder is ever written.
  */
-import { readdir, stat } from 'node:fs/promises';
+import { lstat, readdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { METADATA_FILE } from '../schema/index.ts';
 import { error, hasErrors, sortDiagnostics, type Diagnostic } from './diagnostic.ts';
@@ -71,8 +71,10 @@ export async function readFolder(folder: string, known?: FolderRecord): Promise<
     reused: false,
   });
 
-  // Metadata.
-  const metadataExists = await stat(metadataPath).then(() => true, () => false);
+  // Metadata. A regular file (not a link) is known to exist and to be inside the folder from its lstat alone.
+  const metadataStats = await lstat(path.join(absoluteFolder, METADATA_FILE)).catch(() => undefined);
+  const plainMetadata = metadataStats?.isFile() === true ? metadataStats : undefined;
+  const metadataExists = plainMetadata !== undefined || (metadataStats !== undefined && (await stat(metadataPath).then(() => true, () => false)));
   if (!metadataExists) {
     const others = (await readdir(folder)).filter((name) => /\.ya?ml$/i.test(name));
     diagnostics.push(
@@ -85,12 +87,12 @@ export async function readFolder(folder: string, known?: FolderRecord): Promise<
     );
     return done(folderSlug);
   }
-  const metadataRealpath = await resolveDataFile(absoluteFolder, METADATA_FILE);
+  const metadataRealpath = plainMetadata !== undefined ? { ok: true } : await resolveDataFile(absoluteFolder, METADATA_FILE);
   if (!metadataRealpath.ok) {
     diagnostics.push(error(metadataPath, { line: 0 }, 'metadata file is a symbolic link to a file outside the correlation folder', 'copy the metadata into the folder instead of linking to it'));
     return done(folderSlug);
   }
-  const metadataText = await readText(path.resolve(folder, METADATA_FILE), metadataPath, METADATA_FILE_LIMIT_BYTES);
+  const metadataText = await readText(path.resolve(folder, METADATA_FILE), metadataPath, METADATA_FILE_LIMIT_BYTES, plainMetadata);
   if (!metadataText.ok) {
     diagnostics.push(metadataText.diagnostic);
     return done(folderSlug);
@@ -99,7 +101,7 @@ export async function readFolder(folder: string, known?: FolderRecord): Promise<
   if (known !== undefined && known.metadata === metadataHash) {
     // The same metadata names the same data file: read it as below; the same bytes give the recorded result.
     const knownData = await resolveDataFile(absoluteFolder, known.dataFile);
-    const knownText = knownData.ok ? await readText(knownData.absolutePath, path.join(folder, known.dataFile), DATA_FILE_LIMIT_BYTES) : undefined;
+    const knownText = knownData.ok ? await readText(knownData.absolutePath, path.join(folder, known.dataFile), DATA_FILE_LIMIT_BYTES, knownData.stats) : undefined;
     if (knownText?.ok && bytesHash(knownText.bytes) === known.data) {
       return { result: known.result, sources: { metadata: known.metadata, dataFile: known.dataFile, data: known.data }, reused: true };
     }
@@ -117,7 +119,7 @@ export async function readFolder(folder: string, known?: FolderRecord): Promise<
     diagnostics.push(error(metadataPath, metadata.valueAt(['data', 'file']), resolved.problem, resolved.hint));
     return done(slug);
   }
-  const dataText = await readText(resolved.absolutePath, dataPath, DATA_FILE_LIMIT_BYTES);
+  const dataText = await readText(resolved.absolutePath, dataPath, DATA_FILE_LIMIT_BYTES, resolved.stats);
   if (!dataText.ok) {
     diagnostics.push(dataText.diagnostic);
     return done(slug);

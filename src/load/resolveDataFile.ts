@@ -2,11 +2,16 @@
  * Resolve the data file named in the metadata, refusing any path that leaves the correlation folder, directly
  * (`../other/data.csv`, an absolute path) or through a symbolic link.
  */
+import type { Stats } from 'node:fs';
 import { lstat, realpath } from 'node:fs/promises';
 import path from 'node:path';
 
+/**
+ * `stats` is given when the file is a regular file directly in the folder (not a link): then they are also what
+ * `stat` would say, and readText need not ask again.
+ */
 export type ResolvedDataFile =
-  | { ok: true; absolutePath: string }
+  | { ok: true; absolutePath: string; stats?: Stats }
   | { ok: false; problem: string; hint?: string };
 
 function inside(folder: string, candidate: string): boolean {
@@ -24,11 +29,15 @@ export async function resolveDataFile(folder: string, file: string): Promise<Res
     };
   }
   const absolutePath = path.resolve(folder, file);
+  let stats: Stats;
   try {
-    await lstat(absolutePath);
+    stats = await lstat(absolutePath);
   } catch {
     return { ok: false, problem: `data file '${file}' not found` };
   }
+  // A regular file named without a folder part is an entry of the folder itself, so its real path is the folder's
+  // real path joined with its name: inside, whatever links lead to the folder. No need to resolve both.
+  if (stats.isFile() && path.dirname(file) === '.') return { ok: true, absolutePath, stats };
   let realFolder: string;
   let realFile: string;
   try {
