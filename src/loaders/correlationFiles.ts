@@ -12,6 +12,7 @@
  * file linked into an earlier build's output keeps its bytes.
  */
 import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
 import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { toCacheJson } from '../load/fitCache.ts';
@@ -64,6 +65,15 @@ async function filesPool(jobs: number, options: WriteFilesOptions): Promise<Work
   return bundle === undefined ? undefined : createWorkerPool<FolderJob, { files: number }>(bundle, size, 8);
 }
 
+/** The digest a folder was last written from, or undefined when it has none (never written, or being rewritten). */
+function previousDigest(target: string): string | undefined {
+  try {
+    return readFileSync(path.join(target, DIGEST_FILE), 'utf8');
+  } catch {
+    return undefined;
+  }
+}
+
 /** Run `work` on every item, at most `limit` at a time. */
 async function eachLimited<T>(items: readonly T[], limit: number, work: (item: T) => Promise<unknown>): Promise<void> {
   let next = 0;
@@ -90,14 +100,16 @@ export async function writeCorrelationFiles(
   await mkdir(folder, { recursive: true });
   const fitted = entries.filter((entry) => entry.fit !== null);
   const jobs: FolderJob[] = [];
-  await eachLimited(fitted, 16, async (entry) => {
+  // Which folders to write, found in one synchronous pass (about 0.1 ms a folder): this starts while Astro bundles
+  // the code on this thread, and a read per folder through the event loop waited behind that work each time (N =
+  // 1000 cold build: the workers started 2.9 s after the build did).
+  for (const entry of fitted) {
     const target = path.join(folder, entry.slug);
     const handbook = identity(entry.slug);
     const digest = createHash('sha256').update(version).update('\0').update(toCacheJson([entry, handbook])).digest('hex');
-    const previous = await readFile(path.join(target, DIGEST_FILE), 'utf8').catch(() => undefined);
-    if (previous !== digest) jobs.push({ target, entry, handbook, digest });
+    if (previousDigest(target) !== digest) jobs.push({ target, entry, handbook, digest });
     else options.onFolder?.(entry.slug);
-  });
+  }
   jobs.sort((a, b) => (a.target < b.target ? -1 : 1));
   const pool = await filesPool(jobs.length, options);
   let byWorkers = 0;
