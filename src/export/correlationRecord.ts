@@ -118,7 +118,7 @@ function temperatureScalesRecord(fit: PolynomialFit, symbols: { x: string; y: st
       printedCoefficients: form.printedCoefficients,
       significantDigits: form.significantDigits,
       standardErrors: form.native ? fit.standardErrors.map((value, k) => (k === 0 && !fit.intercept ? NaN : value)) : form.standardErrors,
-      equation: form.native ? equationPlain(fit, symbols) : equationPlain({ ...fit, intercept: true, coefficients: form.coefficients, significantDigits: form.significantDigits }, symbols),
+      equation: form.native ? equationPlain(fit, symbols) : equationPlain({ transformX: fit.transformX, transformY: fit.transformY, intercept: true, coefficients: form.coefficients, significantDigits: form.significantDigits }, symbols),
       mapped: form.mapped,
       checkValues: form.checkValues,
       printedCheckValues: form.printedCheckValues,

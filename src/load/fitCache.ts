@@ -11,11 +11,13 @@
  * pages read the fit, its order table, the previews and the data rows from here (src/load/storedFit.ts), which
  * keeps Astro's store, and the JavaScript module Astro bundles it into, small.
  *
- * Beside each record, `<key>.summary.json` holds the record without its two large arrays (the fit's per-point
- * statistics and the order table's rows): what reading and fitting needs on a cache hit (fingerprint, order, criterion,
- * messages). A hit reads only the summary; the arrays are read from the full record the first time something asks
- * for them (readCachedSummary), and pages read the full record anyway. At N = 1000 this keeps a rebuild from
- * parsing about 50 KB of JSON per unchanged dataset.
+ * Beside each record, `<key>.summary.json` holds the fit and its order selection without the fit's per-point
+ * statistics, and none of the record's other large parts (the data rows, the previews): what reading and fitting
+ * needs on a cache hit (fingerprint, order, criterion, messages) and what the pages and exports show of the fit
+ * (its order table included). A hit reads only the summary, and so does a correlation page, whose data table and
+ * previews come with its page parts (src/components/lib/pageParts.ts); the per-point statistics are read from the
+ * full record the first time something asks for them (readCachedSummary). At N = 1000 this keeps a build from
+ * parsing about 50 KB of JSON per dataset where 15 KB serve.
  *
  * JSON has no NaN, ±Infinity or −0; they are written as {"$number": "NaN"} and restored on reading, so a cached
  * fit equals a fresh one.
@@ -24,7 +26,7 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
-import type { OrderSelection, PolynomialFit } from '../core/index.ts';
+import type { PolynomialFit } from '../core/index.ts';
 import type { DataPoint } from '../schema/index.ts';
 import type { DatasetFit } from './fitDataset.ts';
 import type { LoadedCorrelation } from './types.ts';
@@ -38,7 +40,7 @@ export interface CachedFit extends DatasetFit {
 }
 
 /** Bumped when the layout of a cache file changes. */
-const CACHE_FORMAT = 2;
+const CACHE_FORMAT = 3;
 
 /** Where fits are cached and under which code version. */
 export interface FitCache {
@@ -140,13 +142,12 @@ function summaryFileOf(directory: string, key: string): string {
   return path.join(directory, `${key}.summary.json`);
 }
 
-/** The record without fit.points and selection.orders (what a summary file holds). */
+/** The fit without fit.points, the order selection and the messages (what a summary file holds). */
 function summaryOf(record: CachedFit): DatasetFit {
   const { points: _points, ...fit } = record.fit ?? ({} as PolynomialFit);
-  const { orders: _orders, ...selection } = record.selection ?? ({} as OrderSelection);
   return {
     fit: record.fit === undefined ? undefined : (fit as PolynomialFit),
-    selection: record.selection === undefined ? undefined : (selection as OrderSelection),
+    selection: record.selection,
     diagnostics: record.diagnostics,
   };
 }
@@ -158,8 +159,8 @@ function writeAtomically(target: string, text: string): void {
 }
 
 /**
- * The fit, order selection and messages under `key`, read from the small summary file; `fit.points` and
- * `selection.orders` are read from the full record only when first asked for. Undefined when the cache does not
+ * The fit, order selection and messages under `key`, read from the small summary file; `fit.points` is read from
+ * the full record only when first asked for. Undefined when the cache does not
  * hold the key (or a file cannot be read); a record without a summary (written before summaries existed) is read in
  * full and its summary written.
  * @example readCachedSummary(cache.directory, key)?.fit?.order // => 2
@@ -201,7 +202,7 @@ export function readCachedSummary(directory: string, key: string): DatasetFit | 
   };
   return {
     fit: lazy(summary.fit, 'points', () => record().fit!.points),
-    selection: lazy(summary.selection, 'orders', () => record().selection!.orders),
+    selection: summary.selection,
     diagnostics: summary.diagnostics,
   };
 }

@@ -8,6 +8,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
+import { fromCacheJson } from '../load/fitCache.ts';
 import type { StoredFitReference } from '../load/storedFit.ts';
 import { correlationFilesFolder } from './correlationFilesIntegration.ts';
 
@@ -31,7 +32,7 @@ export function writtenPageParts(reference: StoredFitReference, slug: string, fi
   if (last?.file === full) return last.value;
   let value: unknown;
   try {
-    value = JSON.parse(readFileSync(full, 'utf8'));
+    value = fromCacheJson(readFileSync(full, 'utf8'));
   } catch {
     value = undefined;
   }

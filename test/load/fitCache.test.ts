@@ -89,7 +89,7 @@ describe('fit cache', () => {
     expect(second.datasets.map((item) => item.review)).toEqual(fresh.datasets.map((item) => item.review));
   });
 
-  it('a cache hit reads only the summary: the per-point statistics and the order table come from the full record when first asked for', async () => {
+  it('a cache hit reads only the summary, which holds the order table: the per-point statistics come from the full record when first asked for', async () => {
     const content = path.join(root, 'content');
     const fitCache = { directory: path.join(root, 'cache-summary'), version: 'test-1' };
     const fresh = await fitHandbook(content);
@@ -98,10 +98,13 @@ describe('fit cache', () => {
     const key = hit.datasets[0]!.fitted!.cacheKey!;
     const summaryText = await readFile(path.join(fitCache.directory, `${key}.summary.json`), 'utf8');
     const fullText = await readFile(path.join(fitCache.directory, `${key}.json`), 'utf8');
-    // The summary holds neither large array, and is a small part of the record.
+    // The summary holds no per-point statistics, no data rows and no previews, but the order table (pages and
+    // exports show it), and is a small part of the record.
     const summary = fromCacheJson(summaryText) as { fit: Record<string, unknown>; selection: Record<string, unknown> };
     expect('points' in summary.fit).toBe(false);
-    expect('orders' in summary.selection).toBe(false);
+    expect('points' in summary).toBe(false);
+    expect('previews' in summary).toBe(false);
+    expect(summary.selection['orders']).toEqual(fresh.datasets[0]!.fitted!.selection!.orders);
     expect(summaryText.length).toBeLessThan(fullText.length / 2);
     // With the full record damaged, a hit still gives the fingerprint's inputs (order, printed coefficients)…
     await writeFile(path.join(fitCache.directory, `${key}.json`), '{ damaged');

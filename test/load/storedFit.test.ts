@@ -1,14 +1,15 @@
 /**
  * storedFitSummary: the fit that lists and overlays read from the fit cache's summary file is the full record's
  * fit (the independent computation is the full record read through storedFit), whether or not the record is kept
- * in memory, and its per-point statistics are still there when asked for.
+ * in memory, and its per-point statistics are still there when asked for. A correlation page and the exports read
+ * only the summary: the fit without per-point statistics and the order selection with its order table.
  */
-import { cp, mkdtemp, rm } from 'node:fs/promises';
+import { cp, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitHandbook } from '../../src/load/index.ts';
-import { forgetStoredFits, storedFit, storedFitSummary } from '../../src/load/storedFit.ts';
+import { forgetStoredFits, storedFit, storedFitSummary, storedSelection } from '../../src/load/storedFit.ts';
 
 let root = '';
 beforeAll(async () => {
@@ -35,5 +36,27 @@ describe('storedFitSummary', () => {
     expect(fromSummary.points).toEqual(full.points);
     // Now that the record is kept, the summary is its fit.
     expect(storedFitSummary(reference)).toBe(storedFit(reference));
+  });
+
+  it('the fit and the order selection with its order table are served from the summary without reading the full record', async () => {
+    const fitCache = { directory: path.join(root, 'cache-summary-only'), version: 'test-1' };
+    const handbook = await fitHandbook(path.join(root, 'content'), { fitCache });
+    const fitted = handbook.datasets[0]!.fitted!;
+    const reference = { fitCache: { directory: fitCache.directory, key: fitted.cacheKey! } };
+    const recordFile = path.join(fitCache.directory, `${fitted.cacheKey}.json`);
+    const recordText = await readFile(recordFile, 'utf8');
+    forgetStoredFits();
+    await writeFile(recordFile, '{ damaged');
+    try {
+      const fit = storedFitSummary(reference)!;
+      expect(fit.printedCoefficients).toEqual(fitted.fit!.printedCoefficients);
+      expect(fit.statistics).toEqual(fitted.fit!.statistics);
+      expect(storedSelection(reference)!.orders).toEqual(fitted.selection!.orders);
+      // Only what needs the full record reads it (here: fails, naming it).
+      expect(() => storedFit(reference)).toThrow(/requires the cached fit .* it is missing/);
+    } finally {
+      await writeFile(recordFile, recordText);
+      forgetStoredFits();
+    }
   });
 });

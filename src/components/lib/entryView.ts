@@ -23,8 +23,8 @@ export function fitOf(entry: CorrelationEntry): PolynomialFit | null {
 }
 
 /**
- * The entry's fit for a list or an overlay (the catalogue, the property pages): as fitOf, but read from the fit
- * cache's summary when the record is not in memory (src/load/storedFit.ts storedFitSummary). Its per-point
+ * The entry's fit for a page, a list, an overlay or an export (none of which shows per-point statistics): as fitOf,
+ * but read from the fit cache's summary (src/load/storedFit.ts storedFitSummary), kept for the build. Its per-point
  * statistics are read only if asked for.
  */
 export function fitSummaryOf(entry: CorrelationEntry): PolynomialFit | null {

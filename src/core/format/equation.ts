@@ -13,8 +13,11 @@ export interface EquationSymbols {
   readonly y: string;
 }
 
+/** What an equation is written from: the coefficients with their digits and the transforms. */
+export type EquationFit = Pick<PolynomialFit, 'coefficients' | 'intercept' | 'significantDigits' | 'transformX' | 'transformY'>;
+
 /** u as a factor of a power: bare for identity, in parentheses otherwise ("(1/T)", "(\\ln T)", "ln(T)"). */
-function variableFactor(fit: PolynomialFit, x: string, style: 'plain' | 'tex'): string {
+function variableFactor(fit: EquationFit, x: string, style: 'plain' | 'tex'): string {
   const text = transformedXText(fit.transformX, x, style);
   return fit.transformX === 'identity' || (style === 'plain' && fit.transformX === 'log') ? text : `(${text})`;
 }
@@ -57,7 +60,7 @@ export interface EquationPlainOptions {
  * @example equationPlain(fit, { x: 'T', y: 'p' }) gives "ln(p) = 1.5 - 0.25*T" for a₀ = 1.5, a₁ = −0.25 under ln y;
  * with { digits: 'full' } each coefficient is printed as String(value).
  */
-export function equationPlain(fit: PolynomialFit, symbols: EquationSymbols, options: EquationPlainOptions = {}): string {
+export function equationPlain(fit: EquationFit, symbols: EquationSymbols, options: EquationPlainOptions = {}): string {
   const full = options.digits === 'full';
   const u = variableFactor(fit, symbols.x, 'plain');
   const lhs = transformedYText(fit.transformY, symbols.y, 'plain');

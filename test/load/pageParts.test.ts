@@ -1,0 +1,62 @@
+/**
+ * A correlation page reads what it shows of the fit record's large parts (its data table, the previews'
+ * statistics, whether a point states an uncertainty) from the page parts written with its downloads, through the
+ * cache's JSON (src/loaders/correlationFolder.ts, src/loaders/writtenDownload.ts). Checked on every correlation of
+ * the demo handbook: what the page reads back is exactly what the components compute from the full record in this
+ * thread (the path `astro dev` and tests take), NaN, ±Infinity and −0 included.
+ */
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dataTableView } from '../../src/components/lib/dataRows.ts';
+import { fitOf, pointsOf, previewsOf, selectionOf } from '../../src/components/lib/entryView.ts';
+import { pageParts } from '../../src/components/lib/pageParts.ts';
+import { previewView } from '../../src/components/lib/previewView.ts';
+import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
+import { forgetStoredFits } from '../../src/load/storedFit.ts';
+import { fromCacheJson, toCacheJson } from '../../src/load/fitCache.ts';
+import { storedEntry } from '../../src/loaders/storedEntry.ts';
+import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
+
+let root = '';
+let entries: CorrelationEntry[] = [];
+beforeAll(async () => {
+  root = await mkdtemp(path.join(tmpdir(), 'correlary-page-parts-'));
+  const fitCache = { directory: path.join(root, 'fits'), version: 'test-1' };
+  const handbook = await fitHandbook('content', { fitCache });
+  const histories = await handbookHistory('content', handbook.datasets);
+  entries = handbook.datasets
+    .map((item) => storedEntry(item, fitCache.directory, histories))
+    .filter((entry): entry is CorrelationEntry => entry !== undefined && entry.fit !== null)
+    .map((entry) => correlationEntrySchema.parse(entry) as CorrelationEntry);
+}, 120_000);
+afterAll(async () => {
+  forgetStoredFits();
+  if (root) await rm(root, { recursive: true, force: true });
+});
+
+describe('page parts', () => {
+  it('what a page reads back from its parts equals what the components compute from the full record', () => {
+    expect(entries.length).toBeGreaterThan(10);
+    for (const entry of entries) {
+      const parts = pageParts(entry, {});
+      const read = fromCacheJson(toCacheJson(parts)) as typeof parts;
+      const fit = fitOf(entry)!;
+      const selection = selectionOf(entry);
+      expect(read.dataTable, entry.slug).toEqual(dataTableView(entry, fit));
+      expect(read.previews, entry.slug).toEqual(previewView(previewsOf(entry, fit, selection)));
+      expect(read.uncertainty, entry.slug).toBe(pointsOf(entry).some((point) => point.uncertainty !== undefined));
+      expect(read, entry.slug).toEqual(parts);
+    }
+  });
+
+  it('the demo exercises what the parts must carry: shortened tables, flagged rows, notes, uncertainties and previews', () => {
+    const tables = entries.map((entry) => pageParts(entry, {}).dataTable);
+    expect(tables.some((table) => table.rows.length < table.used)).toBe(true);
+    expect(tables.some((table) => table.flagged > 0)).toBe(true);
+    expect(tables.some((table) => table.hasNote)).toBe(true);
+    expect(tables.some((table) => table.hasUncertainty)).toBe(true);
+    expect(entries.some((entry) => pageParts(entry, {}).previews !== null)).toBe(true);
+  });
+});
