@@ -3,12 +3,12 @@
  * once at build time so that search works on the static site with no server. Loaded by src/client/catalogueSearch.ts.
  */
 import type { APIRoute } from 'astro';
-import { getCollection } from 'astro:content';
+import { correlationEntries } from '../components/lib/correlationEntries.ts';
 import MiniSearch from 'minisearch';
 import { SEARCH_OPTIONS, type SearchDocument } from '../client/searchOptions.ts';
 
 export const GET: APIRoute = async () => {
-  const entries = (await getCollection('correlations')).map((entry) => entry.data);
+  const entries = (await correlationEntries()).map((entry) => entry.data);
   const index = new MiniSearch<SearchDocument>(SEARCH_OPTIONS);
   index.addAll(
     entries.map((entry) => ({

@@ -3,7 +3,7 @@
  * `/handbook-approved.json` (only those whose approval holds: the recorded fingerprint equals the current one; the
  * file a design tool should consume). Both are handbookJson (src/export/handbookJson.ts) over the same records.
  */
-import { getCollection } from 'astro:content';
+import { correlationEntries } from './correlationEntries.ts';
 import { version } from '../../../package.json';
 import { handbookJson } from '../../export/index.ts';
 import { correlationDownloads } from './correlationDownloads.ts';
@@ -19,7 +19,7 @@ import { handbookSettings } from './handbookSettings.ts';
 export async function handbookExport(site: URL | undefined, include: (entry: CorrelationEntry) => boolean = () => true) {
   const settings = await handbookSettings();
   const base = import.meta.env.BASE_URL.replace(/\/?$/, '/');
-  const entries = (await getCollection('correlations')).map((entry) => entry.data).filter((entry) => entry.fit !== null && include(entry));
+  const entries = (await correlationEntries()).map((entry) => entry.data).filter((entry) => entry.fit !== null && include(entry));
   entries.sort((a, b) => (a.slug < b.slug ? -1 : a.slug > b.slug ? 1 : 0));
   return handbookJson({
     generator: { name: 'correlary', version },
