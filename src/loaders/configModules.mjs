@@ -10,11 +10,11 @@
  *
  * The bundle is `node_modules/.cache/correlary/config/config-<16 hex digits>.mjs` under the package root, named by
  * a SHA-256 of package.json and every script file under src/ (so a changed source is never served stale), made by
- * esbuild (present wherever Astro is, through Vite) when missing; packages stay imports of the installed ones, so
- * zod, yaml and Astro are the same instances as without the bundle. Both callers in a process get the same
- * module instance (kept on globalThis). When the bundle cannot be made or imported, the door is imported from its
- * TypeScript source instead: inside Vite's runner that works as before; under plain Node it throws, and Astro
- * then loads astro.config.mjs through Vite.
+ * esbuild (present wherever Astro is, through Vite) when missing; packages other than the statistics ones and
+ * ml-matrix stay imports of the installed ones, so zod, yaml and Astro are the same instances as without the
+ * bundle. Both callers in a process get the same module instance (kept on globalThis). When the bundle cannot be
+ * made or imported, the door is imported from its TypeScript source instead: inside Vite's runner that works as
+ * before; under plain Node it throws, and Astro then loads astro.config.mjs through Vite.
  */
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, readdirSync, renameSync, rmSync } from 'node:fs';
@@ -60,15 +60,23 @@ async function makeBundle(target) {
   const { build } = createRequire(import.meta.url)('esbuild');
   mkdirSync(folder, { recursive: true });
   const temporary = `${target}.${process.pid}.tmp`;
+  // Node resolves and reads each CommonJS file of the statistics packages separately (hundreds of them, about 0.4 s
+  // of CPU), so those and ml-matrix are bundled in, as scripts/build-cli.mjs does; the other packages stay imports
+  // of the installed ones.
+  const manifest = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8'));
+  const bundled = (name) => name.startsWith('@stdlib/') || name === 'ml-matrix';
+  const external = Object.keys({ ...manifest.dependencies, ...manifest.devDependencies }).filter((name) => !bundled(name)).flatMap((name) => [name, `${name}/*`]);
   await build({
     absWorkingDir: root,
     entryPoints: [path.join(root, 'src', 'loaders', 'configDoor.ts')],
     outfile: temporary,
     bundle: true,
-    packages: 'external',
+    external,
     platform: 'node',
     format: 'esm',
     target: 'node20',
+    // The bundled CommonJS packages require Node built-ins; an ES module has no require of its own.
+    banner: { js: "import { createRequire as __correlaryRequire } from 'node:module'; const require = __correlaryRequire(import.meta.url);" },
     logLevel: 'silent',
   });
   renameSync(temporary, target);
