@@ -8,11 +8,7 @@ import type { AstroIntegration } from 'astro';
 import { copyCorrelationFiles, filesWorkerBundle } from './correlationFiles.ts';
 import { fitWorkerBundle } from '../load/fitPool.ts';
 import { beginFiles, filesWritten } from './pendingFiles.ts';
-
-/** Where the loader writes the files, inside Astro's cache folder. @example correlationFilesFolder(config.cacheDir) */
-export function correlationFilesFolder(cacheDir: URL): string {
-  return fileURLToPath(new URL('correlary-files/', cacheDir));
-}
+import { correlationFilesFolder } from './correlationFilesFolder.ts';
 
 /** @example defineConfig({ integrations: [correlationFilesIntegration()] }) */
 export function correlationFilesIntegration(): AstroIntegration {

@@ -14,7 +14,7 @@ import { identityOf } from '../components/lib/identityOf.ts';
 import { handbookSettingsSchema } from '../schema/index.ts';
 import { filesCodeVersion, fitCodeVersion, readingCodeVersion } from '../load/fitCodeVersion.ts';
 import { writeCorrelationFiles } from './correlationFiles.ts';
-import { correlationFilesFolder } from './correlationFilesIntegration.ts';
+import { correlationFilesFolder } from './correlationFilesFolder.ts';
 import { deferFiles } from './pendingFiles.ts';
 import { takeCheckedHandbook } from './checkedHandbook.ts';
 import { storedEntry } from './storedEntry.ts';

@@ -10,7 +10,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { fromCacheJson } from '../load/fitCache.ts';
 import type { StoredFitReference } from '../load/storedFit.ts';
-import { correlationFilesFolder } from './correlationFilesIntegration.ts';
+import { correlationFilesFolder } from './correlationFilesFolder.ts';
 
 const folders = new Map<string, string>();
 /** The last record read: a page's components ask for the same one in turn. */

@@ -3,7 +3,7 @@
  * of the `handbook` collection, which src/loaders/handbookSettingsLoader.ts fills from `handbook.yaml`.
  */
 import { getEntry } from 'astro:content';
-import { handbookSettingsSchema, type HandbookSettings } from '../../schema/index.ts';
+import { handbookSettingsSchema, type HandbookSettings } from '../../schema/handbookSettings.ts';
 
 export type { HandbookSettings };
 
