@@ -57,6 +57,61 @@ const CSV_MESSAGES: Record<string, string> = {
   CSV_INVALID_CLOSING_QUOTE: 'malformed CSV: a quoted field goes on after its closing quote',
 };
 
+/** How csv-parse reads a data file (besides `info`). */
+const PARSE_OPTIONS = { relax_column_count: true, skip_empty_lines: true, comment: '#', comment_no_infix: true, trim: true } as const;
+
+type ParsedRecord = { record: string[]; info: { lines: number } };
+
+/** Whether csv-parse's record holds exactly the trimmed comma-separated fields of one physical line. */
+function isRecordOf(record: readonly string[], lineText: string): boolean {
+  const fields = lineText.split(',');
+  if (fields.length !== record.length) return false;
+  for (let i = 0; i < fields.length; i++) if (fields[i]!.trim() !== record[i]) return false;
+  return true;
+}
+
+/** A line csv-parse skips (blank, or a whole-line comment). */
+function isSkipped(lineText: string): boolean {
+  const start = lineText.trimStart();
+  return start === '' || start.startsWith('#');
+}
+
+/**
+ * The records of a file without quotes and with one kind of line end, each with the line it ends on, from
+ * csv-parse without its per-record info objects (which make parsing about three times dearer). In such a file every
+ * record is one physical line, found by walking past the lines csv-parse skipped (blank and comment lines); each
+ * record is checked against its line's fields. Undefined whenever that does not hold exactly (a quote, mixed or lone
+ * CR line ends, a field csv-parse trims otherwise than String.trim, any parse error): the caller then asks csv-parse
+ * for the lines (test/load/readCsv.test.ts compares both ways on random files).
+ */
+function quoteFreeRecords(text: string, lines: readonly string[]): ParsedRecord[] | undefined {
+  if (text.includes('"')) return undefined;
+  if (text.includes('\r') && /\r(?!\n)|(?<!\r)\n/.test(text)) return undefined;
+  let records: string[][];
+  try {
+    records = parse(text, PARSE_OPTIONS) as string[][];
+  } catch {
+    return undefined;
+  }
+  const parsed: ParsedRecord[] = [];
+  let index = 0;
+  for (const record of records) {
+    // A record of one empty field could stand for a blank line: not told apart here.
+    if (record.length === 1 && record[0] === '') return undefined;
+    for (;;) {
+      const lineText = lines[index++];
+      if (lineText === undefined) return undefined;
+      if (isRecordOf(record, lineText)) {
+        parsed.push({ record, info: { lines: index } });
+        break;
+      }
+      if (!isSkipped(lineText)) return undefined;
+    }
+  }
+  for (; index < lines.length; index++) if (!isSkipped(lines[index]!)) return undefined;
+  return parsed;
+}
+
 /** Say which delimiter the header line uses when it is not a comma, or undefined for a comma file. */
 function foreignDelimiter(headerText: string): 'semicolon' | 'tab' | undefined {
   if (headerText.includes(',')) return undefined;
@@ -69,8 +124,10 @@ function foreignDelimiter(headerText: string): 'semicolon' | 'tab' | undefined {
  * Parse CSV text into a header and rows of text cells with positions. Numbers are not interpreted here.
  * @param text file contents with any BOM removed
  * @param displayPath path printed in messages
+ * @param options `lineInfo: true` always takes each record's line from csv-parse's info objects (what the quote-free
+ *   path must agree with; for tests)
  */
-export function readCsv(text: string, displayPath: string): CsvResult {
+export function readCsv(text: string, displayPath: string, options: { readonly lineInfo?: boolean } = {}): CsvResult {
   const lines = text.split(/\r\n|\n|\r/);
   const headerIndex = lines.findIndex((line) => line.trim() !== '' && !line.trimStart().startsWith('#'));
   if (headerIndex < 0) {
@@ -94,16 +151,9 @@ export function readCsv(text: string, displayPath: string): CsvResult {
     };
   }
 
-  let records: { record: string[]; info: { lines: number } }[];
+  let records: ParsedRecord[];
   try {
-    records = parse(text, {
-      info: true,
-      relax_column_count: true,
-      skip_empty_lines: true,
-      comment: '#',
-      comment_no_infix: true,
-      trim: true,
-    }) as unknown as { record: string[]; info: { lines: number } }[];
+    records = (options.lineInfo ? undefined : quoteFreeRecords(text, lines)) ?? (parse(text, { ...PARSE_OPTIONS, info: true }) as unknown as ParsedRecord[]);
   } catch (caught) {
     if (!(caught instanceof CsvError)) throw caught;
     let line = typeof caught['lines'] === 'number' ? caught['lines'] : 1;
