@@ -76,6 +76,13 @@ describe('readFolder', () => {
       expect(again.reused).toBe(true);
       expect(again.result).toStrictEqual(fresh);
       expect(again.result.diagnostics.map(formatDiagnostic)).toEqual(fresh.diagnostics.map(formatDiagnostic));
+      // The rows, kept apart in the record, are read back sharing their objects as a fresh read's do.
+      const correlation = again.result.correlation;
+      if (correlation !== undefined) {
+        expect(correlation.points).toStrictEqual(fresh.correlation!.points);
+        for (const point of correlation.used) expect(correlation.points).toContain(point);
+        expect(Object.keys(correlation)).toEqual(Object.keys(fresh.correlation!));
+      }
       reused++;
       if (fresh.diagnostics.some((diagnostic) => diagnostic.severity === 'error')) withErrors++;
       if (fresh.diagnostics.some((diagnostic) => diagnostic.severity === 'warning')) withWarnings++;
