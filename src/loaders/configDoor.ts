@@ -12,5 +12,6 @@ export { formatDiagnostic } from '../load/diagnostic.ts';
 export { readHandbookSettings } from '../load/readHandbookSettings.ts';
 export { correlationFilesIntegration } from './correlationFilesIntegration.ts';
 export { dataStoreIntegration } from './dataStoreIntegration.ts';
+export { coreBundleIntegration } from './coreBundleIntegration.ts';
 export { correlationLoader } from './correlationLoader.ts';
 export { handbookSettingsLoader } from './handbookSettingsLoader.ts';

@@ -23,7 +23,7 @@ function inPlainNode(script: string, env: Record<string, string> = {}): unknown 
 }
 
 describe('configModules()', () => {
-  it('plain Node imports astro.config.mjs: the site and base path of the content folder\'s settings, both integrations', () => {
+  it('plain Node imports astro.config.mjs: the site and base path of the content folder\'s settings, its integrations', () => {
     const content = mkdtempSync(path.join(tmpdir(), 'correlary-config-'));
     try {
       writeFileSync(path.join(content, 'handbook.yaml'), 'title: Test handbook\nurl: https://handbook.example.org\nbasePath: /thermal/\n');
@@ -32,7 +32,7 @@ describe('configModules()', () => {
         { CORRELARY_CONTENT: content },
       );
       // The settings file written above, as astro.config.mjs passes it on (computed by hand).
-      expect(config).toEqual({ site: 'https://handbook.example.org', base: '/thermal/', integrations: ['correlary-correlation-files', 'correlary-data-store-module'] });
+      expect(config).toEqual({ site: 'https://handbook.example.org', base: '/thermal/', integrations: ['correlary-correlation-files', 'correlary-data-store-module', 'correlary-core-bundle'] });
     } finally {
       rmSync(content, { recursive: true, force: true });
     }
