@@ -10,7 +10,7 @@ import { createHash } from 'node:crypto';
 import { mkdir, mkdtemp, readdir, rm, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
-import { fitHandbook, formatDiagnostic } from '../load/index.ts';
+import { fitHandbook, formatDiagnostic, handbookHistory } from '../load/index.ts';
 import { fitCodeVersion, readingCodeVersion } from '../load/fitCodeVersion.ts';
 import { offerCheckedHandbook } from '../loaders/checkedHandbook.ts';
 import { CliError } from './cliError.ts';
@@ -92,7 +92,10 @@ export async function runBuild(args: string[]): Promise<number> {
   // Vite lets environment variables named like its import.meta.env keys override them; a BASE_URL left in a shell
   // or CI environment would silently replace --base in every link.
   for (const key of ['BASE_URL', 'SITE', 'ASSETS_PREFIX', 'MODE', 'DEV', 'PROD', 'SSR']) delete process.env[key];
-  offerCheckedHandbook({ directory, workingDirectory: process.cwd(), fitCache }, handbook);
+  // With the histories from git made here, where the handbook's paths are relative to, the loader takes this pass even
+  // when Astro runs from the staging folder below (src/loaders/checkedHandbook.ts).
+  const histories = await handbookHistory(directory, handbook.datasets);
+  offerCheckedHandbook({ call: { directory, workingDirectory: process.cwd(), fitCache }, handbook, histories });
   const { build } = await import('astro');
   // Astro 5 stages a build whose output folder lies outside the working directory in <cwd>/.astro, imports the
   // staged pages from there (so Correlary's dependencies must resolve from it) and then copies that whole folder

@@ -41,17 +41,19 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   const call = { directory: displayDirectory, workingDirectory: process.cwd(), fitCache };
   // Each folder's reading and fitting is recorded, so that an unchanged folder is neither parsed nor validated again.
   const folderRecords = { directory: fileURLToPath(new URL('correlary-folders/', context.config.cacheDir)), version: readingCodeVersion(fileURLToPath(context.config.root)) };
-  const handbook =
-    (context.watcher === undefined ? takeCheckedHandbook(call) : undefined) ??
-    (await fitHandbook(displayDirectory, { fitCache, folderRecords, workers: { root: fileURLToPath(context.config.root) }, prune: true }));
+  const checked = context.watcher === undefined ? takeCheckedHandbook(call) : undefined;
+  const handbook = checked?.handbook ?? (await fitHandbook(displayDirectory, { fitCache, folderRecords, workers: { root: fileURLToPath(context.config.root) }, prune: true }));
+  // Paths in the handbook are relative to the working directory of the pass that read it (the check pass's may be
+  // another: a build staged outside the user's working directory, see checkedHandbook.ts).
+  const passDirectory = checked?.call.workingDirectory ?? process.cwd();
   // Two git processes for the whole folder; dates come from commits, so the same commit builds the same pages.
-  const histories = await handbookHistory(displayDirectory, handbook.datasets);
+  const histories = checked?.histories ?? (await handbookHistory(displayDirectory, handbook.datasets));
   const entries: { entry: Record<string, unknown>; filePath: string }[] = [];
   for (const item of handbook.datasets) {
     const entry = storedEntry(item, fitCache.directory, histories);
     const correlation = item.dataset.correlation;
     if (entry === undefined || correlation === undefined) continue;
-    entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(correlation.metadataPath)) });
+    entries.push({ entry, filePath: path.relative(fileURLToPath(context.config.root), path.resolve(passDirectory, correlation.metadataPath)) });
   }
 
   const sorted = handbook.diagnostics;

@@ -12,7 +12,7 @@ import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/
 import { fitOf, pointsOf } from '../../src/components/lib/entryView.ts';
 import { correlationFiles } from '../../src/components/lib/correlationFiles.ts';
 import { identityOf } from '../../src/components/lib/identityOf.ts';
-import { readHandbookSettings } from '../../src/load/index.ts';
+import { handbookHistory, readHandbookSettings } from '../../src/load/index.ts';
 import { handbookSettingsSchema } from '../../src/schema/index.ts';
 import { copyCorrelationFiles, writeCorrelationFiles } from '../../src/loaders/correlationFiles.ts';
 import { filesWritten, startFiles } from '../../src/loaders/pendingFiles.ts';
@@ -75,17 +75,40 @@ describe('correlationLoader()', () => {
       await filesWritten();
       return [...entries.values()].map((entry) => (entry.data as CorrelationEntry).meta.title);
     };
-    offerCheckedHandbook({ directory, workingDirectory: process.cwd(), fitCache }, marked);
+    offerCheckedHandbook({ call: { directory, workingDirectory: process.cwd(), fitCache }, handbook: marked });
     expect(await titles()).toContain('Offered by the check pass');
     expect(await titles()).not.toContain('Offered by the check pass'); // taken once
-    // Another code version, working directory or content folder: the loader reads the handbook itself.
+    // Another code version or content folder, or another working directory without the histories: the loader reads
+    // the handbook itself.
     for (const call of [
       { directory, workingDirectory: process.cwd(), fitCache: { ...fitCache, version: 'another' } },
       { directory, workingDirectory: path.join(process.cwd(), 'src'), fitCache },
       { directory: 'test/fixtures/content', workingDirectory: process.cwd(), fitCache },
     ]) {
-      offerCheckedHandbook(call, marked);
+      offerCheckedHandbook({ call, handbook: marked });
       expect(await titles()).not.toContain('Offered by the check pass');
+    }
+  });
+
+  it('takes the check pass offered with its histories also when Astro runs from another working directory (a staged build), naming files from the check pass\'s', async () => {
+    const directory = 'test/fixtures/content/valid';
+    const userDirectory = process.cwd();
+    const fitCache = { directory: path.join(cacheDir, 'correlary-fits'), version: fitCodeVersion(userDirectory) };
+    const checked = await fitHandbook(directory, { fitCache });
+    const histories = await handbookHistory(directory, checked.datasets);
+    const marked = { ...checked, datasets: checked.datasets.map((item) => ({ ...item, dataset: { ...item.dataset, correlation: { ...item.dataset.correlation!, meta: { ...item.dataset.correlation!.meta, title: 'Offered by the check pass' } } } })) };
+    offerCheckedHandbook({ call: { directory, workingDirectory: userDirectory, fitCache }, handbook: marked, histories });
+    // `correlary build --out` outside the working directory runs Astro from a staging folder (the project root stays).
+    const { context, entries } = fakeContext();
+    const staged = vi.spyOn(process, 'cwd').mockReturnValue(path.join(userDirectory, 'src'));
+    try {
+      await correlationLoader({ directory: path.join(userDirectory, directory) }).load(context);
+      await filesWritten();
+      const entry = entries.get('liquid-a')!;
+      expect((entry.data as CorrelationEntry).meta.title).toBe('Offered by the check pass');
+      expect(entry.filePath).toBe('test/fixtures/content/valid/liquid-a/correlation.yaml');
+    } finally {
+      staged.mockRestore();
     }
   });
 
