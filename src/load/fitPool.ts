@@ -37,7 +37,13 @@ export function poolSize(jobs: number, minimum = POOL_MINIMUM_JOBS): number {
  * @example await fitWorkerBundle(root, '.cache/correlary-worker') // => '.cache/correlary-worker/fit-worker-….mjs'
  */
 export function fitWorkerBundle(root: string, folder: string): Promise<string | undefined> {
-  return workerBundle(path.join(root, 'src', 'load', 'fitWorker.ts'), 'fit-worker', sourcesVersion(root), folder);
+  const { entry, prefix } = fitWorkerSource(root);
+  return workerBundle(entry, prefix, sourcesVersion(root), folder);
+}
+
+/** The fitting worker's entry and bundle name. @example fitWorkerSource('.').prefix // => 'fit-worker' */
+export function fitWorkerSource(root: string): { entry: string; prefix: string } {
+  return { entry: path.join(root, 'src', 'load', 'fitWorker.ts'), prefix: 'fit-worker' };
 }
 
 /**

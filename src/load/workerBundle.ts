@@ -16,32 +16,47 @@ import path from 'node:path';
  * @example await workerBundle('src/load/fitWorker.ts', 'fit-worker', fitCodeVersion('.'), '.cache/correlary-worker') // => '.cache/correlary-worker/fit-worker-1f2e….mjs'
  */
 export function workerBundle(entry: string, prefix: string, version: string, folder: string): Promise<string | undefined> {
-  const target = path.join(folder, `${prefix}-${version.slice(0, 16)}.mjs`);
+  return workerBundles([{ entry, prefix }], version, folder)[0]!;
+}
+
+/**
+ * Several bundles at once, as workerBundle makes each: those missing are made by one esbuild run, which reads the
+ * sources they share once (a build whose sources changed makes three: the two workers' and the core's for the
+ * server build, about half the CPU of three runs).
+ * @example workerBundles([{ entry: 'src/load/fitWorker.ts', prefix: 'fit-worker' }], version, folder) // => [Promise<'…/fit-worker-1f2e….mjs'>]
+ */
+export function workerBundles(bundles: readonly { entry: string; prefix: string }[], version: string, folder: string): Promise<string | undefined>[] {
   // One build per bundle at a time in this process: the build's integration starts building the bundles early
   // (correlationFilesIntegration.ts) and the pools ask for them later, from other module instances.
   const building = ((globalThis as Building)[BUILDING] ??= new Map<string, Promise<string | undefined>>());
-  const known = building.get(target);
-  if (known !== undefined) return known;
-  const made = buildBundle(entry, prefix, target, folder).finally(() => building.delete(target));
-  building.set(target, made);
-  return made;
+  const targets = bundles.map(({ prefix }) => path.join(folder, `${prefix}-${version.slice(0, 16)}.mjs`));
+  const missing = bundles.flatMap((bundle, index) => (building.has(targets[index]!) || existsSync(targets[index]!) ? [] : [{ ...bundle, target: targets[index]! }]));
+  if (missing.length > 0) {
+    const made = buildBundles(missing, folder);
+    missing.forEach(({ target }, index) => {
+      const one = made.then((files) => files[index]).finally(() => building.delete(target));
+      building.set(target, one);
+    });
+  }
+  return targets.map((target) => building.get(target) ?? Promise.resolve(existsSync(target) ? target : undefined));
 }
 
 const BUILDING = Symbol.for('correlary.workerBundlesBuilding');
 type Building = { [BUILDING]?: Map<string, Promise<string | undefined>> };
 
-async function buildBundle(entry: string, prefix: string, target: string, folder: string): Promise<string | undefined> {
-  if (existsSync(target)) return target;
-  if (!existsSync(entry)) return undefined;
+async function buildBundles(bundles: readonly { entry: string; prefix: string; target: string }[], folder: string): Promise<(string | undefined)[]> {
+  const present = bundles.filter(({ entry }) => existsSync(entry));
+  if (present.length === 0) return bundles.map(() => undefined);
   try {
     // Required, not imported: inside Vite's module runner (Astro's content loading) a dynamic import goes through
     // the runner, which may be closed by then.
     const { build } = createRequire(import.meta.url)('esbuild') as typeof import('esbuild');
     mkdirSync(folder, { recursive: true });
-    const temporary = `${target}.${process.pid}.tmp.mjs`;
+    const temporary = (target: string) => `${path.basename(target, '.mjs')}.${process.pid}.tmp`;
     await build({
-      entryPoints: [entry],
-      outfile: temporary,
+      entryPoints: Object.fromEntries(present.map(({ entry, target }) => [temporary(target), entry])),
+      outdir: folder,
+      outExtension: { '.js': '.mjs' },
       bundle: true,
       platform: 'node',
       format: 'esm',
@@ -50,14 +65,16 @@ async function buildBundle(entry: string, prefix: string, target: string, folder
       banner: { js: "import { createRequire as __correlaryRequire } from 'node:module'; const require = __correlaryRequire(import.meta.url);" },
       logLevel: 'silent',
     });
-    renameSync(temporary, target);
-    // Bundles of older code are never used again.
-    const old = new RegExp(`^${prefix}-[0-9a-f]{16}\\.mjs$`);
-    for (const name of readdirSync(folder)) {
-      if (old.test(name) && path.join(folder, name) !== target) rmSync(path.join(folder, name), { force: true });
+    for (const { prefix, target } of present) {
+      renameSync(path.join(folder, `${temporary(target)}.mjs`), target);
+      // Bundles of older code are never used again.
+      const old = new RegExp(`^${prefix}-[0-9a-f]{16}\\.mjs$`);
+      for (const name of readdirSync(folder)) {
+        if (old.test(name) && path.join(folder, name) !== target) rmSync(path.join(folder, name), { force: true });
+      }
     }
-    return target;
+    return bundles.map((bundle) => (present.includes(bundle) ? bundle.target : undefined));
   } catch {
-    return undefined;
+    return bundles.map(() => undefined);
   }
 }

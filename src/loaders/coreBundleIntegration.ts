@@ -18,7 +18,13 @@ import { workerBundle } from '../load/workerBundle.ts';
  * @example await coreBundle('/site', '/site/node_modules/.astro/correlary-worker') // => '/site/node_modules/.astro/correlary-worker/core-1f2e….mjs'
  */
 export function coreBundle(root: string, folder: string): Promise<string | undefined> {
-  return workerBundle(path.join(root, 'src', 'core', 'index.ts'), 'core', sourcesVersion(root), folder);
+  const { entry, prefix } = coreBundleSource(root);
+  return workerBundle(entry, prefix, sourcesVersion(root), folder);
+}
+
+/** The core bundle's entry (the core's door) and name. @example coreBundleSource('.').prefix // => 'core' */
+export function coreBundleSource(root: string): { entry: string; prefix: string } {
+  return { entry: path.join(root, 'src', 'core', 'index.ts'), prefix: 'core' };
 }
 
 /** @example defineConfig({ integrations: [coreBundleIntegration()] }) */

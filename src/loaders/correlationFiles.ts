@@ -50,7 +50,13 @@ type FolderJob = { target: string; entry: CorrelationEntry; handbook: HandbookId
  * @example await filesWorkerBundle(root, '.cache/correlary-worker') // => '.cache/correlary-worker/files-worker-….mjs'
  */
 export function filesWorkerBundle(root: string, folder: string): Promise<string | undefined> {
-  return workerBundle(path.join(root, 'src', 'loaders', 'filesWorker.ts'), 'files-worker', sourcesVersion(root), folder);
+  const { entry, prefix } = filesWorkerSource(root);
+  return workerBundle(entry, prefix, sourcesVersion(root), folder);
+}
+
+/** The files worker's entry and bundle name. @example filesWorkerSource('.').prefix // => 'files-worker' */
+export function filesWorkerSource(root: string): { entry: string; prefix: string } {
+  return { entry: path.join(root, 'src', 'loaders', 'filesWorker.ts'), prefix: 'files-worker' };
 }
 
 /** A pool of files workers for `jobs` folders to write, or undefined (then they are written in this thread). */

@@ -5,8 +5,11 @@
  */
 import { fileURLToPath } from 'node:url';
 import type { AstroIntegration } from 'astro';
-import { copyCorrelationFiles, filesWorkerBundle } from './correlationFiles.ts';
-import { fitWorkerBundle } from '../load/fitPool.ts';
+import { copyCorrelationFiles, filesWorkerSource } from './correlationFiles.ts';
+import { fitWorkerSource } from '../load/fitPool.ts';
+import { sourcesVersion } from '../load/fitCodeVersion.ts';
+import { workerBundles } from '../load/workerBundle.ts';
+import { coreBundleSource } from './coreBundleIntegration.ts';
 import { beginFiles, filesWritten } from './pendingFiles.ts';
 import { correlationFilesFolder } from './correlationFilesFolder.ts';
 
@@ -19,13 +22,14 @@ export function correlationFilesIntegration(): AstroIntegration {
       'astro:config:setup': ({ command, config, injectRoute }) => {
         // From the project root, not from this file: it runs from a bundle in node_modules/.cache (configModules.mjs).
         if (command === 'dev') injectRoute({ pattern: '/correlations/[slug]/[file]', entrypoint: fileURLToPath(new URL('src/routes/correlationFile.ts', config.root)) });
-        // A build fits and writes files in worker threads run from bundles of their code: have esbuild make any
-        // missing bundle now, in its own process, while Astro starts up, rather than when the loader needs it.
+        // A build fits and writes files in worker threads run from bundles of their code, and its server build
+        // takes the core as a bundle (coreBundleIntegration.ts): have esbuild make any missing bundle now, all in
+        // one run (they share most of their sources), in its own process, while Astro starts up, rather than when
+        // the loader needs it.
         if (command === 'build') {
           const root = fileURLToPath(config.root);
           const folder = fileURLToPath(new URL('correlary-worker/', config.cacheDir));
-          void fitWorkerBundle(root, folder);
-          void filesWorkerBundle(root, folder);
+          void workerBundles([fitWorkerSource(root), filesWorkerSource(root), coreBundleSource(root)], sourcesVersion(root), folder);
         }
       },
       // The downloads the loader prepared start being written once Astro has synced the content and saved its store
