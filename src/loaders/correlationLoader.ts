@@ -18,6 +18,7 @@ import { correlationFilesFolder } from './correlationFilesFolder.ts';
 import { deferFiles } from './pendingFiles.ts';
 import { takeCheckedHandbook } from './checkedHandbook.ts';
 import { storedEntry } from './storedEntry.ts';
+import { rememberStoredCorrelations } from './storedCorrelations.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -68,11 +69,26 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
 
   context.store.clear();
   const stored: CorrelationEntry[] = [];
+  const inputs: { id: string; data: Record<string, unknown>; digest: string; filePath: string }[] = [];
   for (const { entry, filePath } of entries) {
     const id = String(entry['slug']);
     const data = await context.parseData({ id, data: entry, filePath });
-    context.store.set({ id, data, digest: context.generateDigest(data), filePath });
+    const input = { id, data, digest: String(context.generateDigest(data)), filePath };
+    context.store.set(input);
+    inputs.push(input);
     stored.push(data as CorrelationEntry);
+  }
+  // So that the bundling of the store can check Astro saved all of it (storedCorrelations.ts).
+  if (context.watcher === undefined) {
+    rememberStoredCorrelations({
+      digests: inputs.map((input) => input.digest),
+      resave: () => {
+        const first = inputs[0];
+        if (first === undefined) return;
+        context.store.delete(first.id);
+        context.store.set(first);
+      },
+    });
   }
   // A build writes each correlation's downloads once here (copied into the output at the end); `astro dev`, which
   // watches the content, serves them from a route instead.

@@ -9,7 +9,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
-import { dataStoreIntegration, dataStoreModule } from '../../src/loaders/dataStoreIntegration.ts';
+import { completeStoreFile, dataStoreIntegration, dataStoreModule } from '../../src/loaders/dataStoreIntegration.ts';
+import { missingDigests, rememberStoredCorrelations } from '../../src/loaders/storedCorrelations.ts';
 
 const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-data-store-'));
 afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
@@ -31,7 +32,7 @@ async function evaluate(code: string): Promise<unknown> {
 }
 
 type Hooks = { 'astro:config:setup': (options: unknown) => void };
-type Plugin = { name: string; transform: (code: string, id: string) => { code: string } | null };
+type Plugin = { name: string; transform: (code: string, id: string) => Promise<{ code: string } | null> };
 
 describe('dataStoreIntegration()', () => {
   it('dataStoreModule evaluates to exactly what JSON.parse gives for the store file', async () => {
@@ -44,6 +45,7 @@ describe('dataStoreIntegration()', () => {
 
   it('in a build, rewrites only the data store module, from the store file in the cache folder; in dev, nothing', async () => {
     writeFileSync(path.join(cacheDir, 'data-store.json'), store);
+    rememberStoredCorrelations({ digests: [], resave: () => undefined });
     const plugins: Plugin[] = [];
     const setup = (dataStoreIntegration().hooks as unknown as Hooks)['astro:config:setup'];
     const config = { cacheDir: pathToFileURL(`${cacheDir}/`) };
@@ -52,8 +54,34 @@ describe('dataStoreIntegration()', () => {
     setup({ command: 'build', config, updateConfig: (update: { vite: { plugins: Plugin[] } }) => plugins.push(...update.vite.plugins) });
     expect(plugins).toHaveLength(1);
     const plugin = plugins[0]!;
-    expect(plugin.transform('export default 1', '/src/pages/index.astro')).toBeNull();
-    const rewritten = plugin.transform('export default [/* Astro spells the store out here */]', '\0astro:data-layer-content');
+    expect(await plugin.transform('export default 1', '/src/pages/index.astro')).toBeNull();
+    const rewritten = await plugin.transform('export default [/* Astro spells the store out here */]', '\0astro:data-layer-content');
     expect(await evaluate(rewritten!.code)).toStrictEqual(JSON.parse(store));
+  });
+
+  // Astro 5.18 can keep an earlier store in the file when two saves overlap (src/loaders/storedCorrelations.ts).
+  it('missingDigests counts the stored entries whose digest the store file does not hold', () => {
+    const text = JSON.stringify([['Map', 1], 'correlations', { digest: 3 }, '0f1e2d3c4b5a6978']);
+    expect(missingDigests(text, ['0f1e2d3c4b5a6978'])).toBe(0);
+    expect(missingDigests(text, ['0f1e2d3c4b5a6978', 'ffffffffffffffff', '0f1e2d3c'])).toBe(2);
+  });
+
+  it('a store file that lacks entries the loader stored is saved again by Astro before it is bundled, or stops the build', async () => {
+    const file = path.join(cacheDir, 'stale-store.json');
+    const stale = JSON.stringify([['Map', 1], 'correlations', 'aaaaaaaaaaaaaaaa']);
+    const complete = JSON.stringify([['Map', 1], 'correlations', 'aaaaaaaaaaaaaaaa', 'bbbbbbbbbbbbbbbb']);
+    writeFileSync(file, stale);
+    let resaved = 0;
+    // Astro's second save writes what it holds in memory, half a second later.
+    rememberStoredCorrelations({ digests: ['aaaaaaaaaaaaaaaa', 'bbbbbbbbbbbbbbbb'], resave: () => { resaved++; setTimeout(() => writeFileSync(file, complete), 200); } });
+    expect(await completeStoreFile(file, stale)).toBe(complete);
+    expect(resaved).toBe(1);
+    // A file that holds them all is taken as it is.
+    expect(await completeStoreFile(file, complete)).toBe(complete);
+    expect(resaved).toBe(1);
+    // A save that never comes: the build stops, naming the file and what it lacks.
+    writeFileSync(file, stale);
+    rememberStoredCorrelations({ digests: ['aaaaaaaaaaaaaaaa', 'bbbbbbbbbbbbbbbb'], resave: () => undefined });
+    await expect(completeStoreFile(file, stale, 300)).rejects.toThrow(/lacks 1 of the 2 correlations read in this build/);
   });
 });
