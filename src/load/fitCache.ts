@@ -23,13 +23,14 @@
  * fit equals a fresh one.
  */
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
 import type { PolynomialFit } from '../core/index.ts';
 import type { DataPoint } from '../schema/index.ts';
 import type { DatasetFit } from './fitDataset.ts';
 import type { LoadedCorrelation } from './types.ts';
+import { pruneKeyedFiles } from './pruneKeyedFiles.ts';
 
 /** One cache file: the dataset's fit, the previews of its other orders, and every data row (for the pages). */
 export interface CachedFit extends DatasetFit {
@@ -257,19 +258,6 @@ export function writeCachedFit(directory: string, key: string, fitted: CachedFit
  * @example pruneFitCache(cache.directory, new Set(keys)) // => 3 (records deleted)
  */
 export function pruneFitCache(directory: string, keep: ReadonlySet<string>): number {
-  let names: string[];
-  try {
-    names = readdirSync(directory);
-  } catch {
-    return 0;
-  }
-  let deleted = 0;
-  for (const name of names) {
-    // Temporary files (…json.<pid>.tmp) may belong to a build running now: left alone.
-    const match = /^([0-9a-f]{64})(?:\.summary)?\.json$/.exec(name);
-    if (match === null || keep.has(match[1]!)) continue;
-    rmSync(path.join(directory, name), { force: true });
-    deleted++;
-  }
-  return deleted;
+  // Temporary files (…json.<pid>.tmp) may belong to a build running now: left alone (the pattern does not match them).
+  return pruneKeyedFiles(directory, /^([0-9a-f]{64})(?:\.summary)?\.json$/, keep);
 }

@@ -22,12 +22,13 @@
  * records, 9–19 ms without the rows).
  */
 import { createHash } from 'node:crypto';
-import { mkdirSync, readFileSync, readdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { deserialize, serialize } from 'node:v8';
 import type { Diagnostic } from './diagnostic.ts';
 import type { Fingerprint } from './review/fingerprint.ts';
 import type { DatasetResult } from './types.ts';
+import { pruneKeyedFiles } from './pruneKeyedFiles.ts';
 
 /** Bumped when the layout of a record changes. */
 const RECORD_FORMAT = 2;
@@ -148,18 +149,5 @@ export function writeFolderRecord(directory: string, key: string, record: Omit<F
  * @example pruneFolderRecords(directory, new Set(keys)) // => 1 (records deleted)
  */
 export function pruneFolderRecords(directory: string, keep: ReadonlySet<string>): number {
-  let names: string[];
-  try {
-    names = readdirSync(directory);
-  } catch {
-    return 0;
-  }
-  let deleted = 0;
-  for (const name of names) {
-    const match = /^([0-9a-f]{64})\.v8$/.exec(name);
-    if (match === null || keep.has(match[1]!)) continue;
-    rmSync(path.join(directory, name), { force: true });
-    deleted++;
-  }
-  return deleted;
+  return pruneKeyedFiles(directory, /^([0-9a-f]{64})\.v8$/, keep);
 }
