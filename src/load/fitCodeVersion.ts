@@ -23,17 +23,22 @@ function sourceFiles(folder: string): string[] {
     .sort();
 }
 
+/** The `version` of `<folder>/package.json` as text ("undefined" without one), or "unknown" when it cannot be read. */
+function packageVersion(folder: string): string {
+  try {
+    return String((JSON.parse(readFileSync(path.join(folder, 'package.json'), 'utf8')) as { version?: string }).version);
+  } catch {
+    return 'unknown';
+  }
+}
+
 /**
  * @param packageRoot the folder holding package.json and src/
  * @example fitCodeVersion('.').length // => 64
  */
 export function fitCodeVersion(packageRoot: string): string {
   const hash = createHash('sha256');
-  try {
-    hash.update(String((JSON.parse(readFileSync(path.join(packageRoot, 'package.json'), 'utf8')) as { version?: string }).version));
-  } catch {
-    hash.update('unknown');
-  }
+  hash.update(packageVersion(packageRoot));
   const files = [
     ...sourceFiles(path.join(packageRoot, 'src', 'core')),
     ...sourceFiles(path.join(packageRoot, 'src', 'render')),
@@ -99,7 +104,7 @@ function installedVersion(packageRoot: string, name: string): string {
     // The package's entry point, then up to the folder named after it (its package.json need not be exported).
     let folder = path.dirname(createRequire(path.join(packageRoot, 'package.json')).resolve(name));
     while (path.basename(folder) !== name && path.dirname(folder) !== folder) folder = path.dirname(folder);
-    return String((JSON.parse(readFileSync(path.join(folder, 'package.json'), 'utf8')) as { version?: string }).version);
+    return packageVersion(folder);
   } catch {
     return 'unknown';
   }
@@ -115,11 +120,7 @@ function installedVersion(packageRoot: string, name: string): string {
  */
 export function readingCodeVersion(packageRoot: string): string {
   const hash = createHash('sha256');
-  try {
-    hash.update(String((JSON.parse(readFileSync(path.join(packageRoot, 'package.json'), 'utf8')) as { version?: string }).version));
-  } catch {
-    hash.update('unknown');
-  }
+  hash.update(packageVersion(packageRoot));
   hash.update('\0').update(`node ${process.version} v8 ${process.versions.v8}`);
   for (const name of ['yaml', 'csv-parse', 'zod']) hash.update('\0').update(`${name}@${installedVersion(packageRoot, name)}`);
   for (const file of ['load', 'schema', 'core'].flatMap((folder) => sourceFiles(path.join(packageRoot, 'src', folder)))) {

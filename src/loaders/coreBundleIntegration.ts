@@ -35,7 +35,7 @@ export function coreBundleIntegration(): AstroIntegration {
       'astro:config:setup': ({ command, config, updateConfig }) => {
         if (command !== 'build') return;
         const root = fileURLToPath(config.root);
-        const door = path.join(root, 'src', 'core', 'index.ts');
+        const door = coreBundleSource(root).entry;
         // Made while Astro starts up and syncs the content; the server build asks for it when a page imports the door.
         const bundle = coreBundle(root, fileURLToPath(new URL('correlary-worker/', config.cacheDir)));
         updateConfig({
