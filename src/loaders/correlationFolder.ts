@@ -7,6 +7,7 @@ import path from 'node:path';
 import { correlationFiles } from '../components/lib/correlationFiles.ts';
 import { snippetKinds } from '../components/lib/entrySnippets.ts';
 import { PAGE_PARTS_FILE, pageParts } from '../components/lib/pageParts.ts';
+import { folderExtras } from '../components/lib/folderExtras.ts';
 import { toCacheJson } from '../load/fitCache.ts';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
@@ -32,7 +33,7 @@ export async function writeCorrelationFolder(target: string, entry: CorrelationE
   const snippets = Object.fromEntries(snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
   // The cache's JSON: the data table's diagnostics may hold NaN or ±Infinity, which JSON.stringify would write as null.
   const parts = { file: PAGE_PARTS_FILE, text: toCacheJson(pageParts(entry, snippets)) };
-  for (const file of [...files, parts]) writeFileSync(path.join(target, file.file), file.text, { flag: 'wx' });
+  for (const file of [...files, parts, ...folderExtras(texts, handbook)]) writeFileSync(path.join(target, file.file), file.text, { flag: 'wx' });
   // Last: a folder left half-written by a failed build has no digest and is written again.
   writeFileSync(path.join(target, DIGEST_FILE), digest, { flag: 'wx' });
   return files.length;

@@ -8,6 +8,5 @@ import { handbookExport } from '../components/lib/handbookExport.ts';
 import { approvalHolds } from '../components/lib/reviewView.ts';
 
 export const GET: APIRoute = async ({ site }) => {
-  const json = await handbookExport(site, approvalHolds);
-  return new Response(`${JSON.stringify(json, null, 2)}\n`, { headers: { 'Content-Type': 'application/json; charset=utf-8' } });
+  return new Response(await handbookExport(site, approvalHolds), { headers: { 'Content-Type': 'application/json; charset=utf-8' } });
 };

@@ -6,6 +6,5 @@ import type { APIRoute } from 'astro';
 import { handbookExport } from '../components/lib/handbookExport.ts';
 
 export const GET: APIRoute = async ({ site }) => {
-  const json = await handbookExport(site);
-  return new Response(`${JSON.stringify(json, null, 2)}\n`, { headers: { 'Content-Type': 'application/json; charset=utf-8' } });
+  return new Response(await handbookExport(site), { headers: { 'Content-Type': 'application/json; charset=utf-8' } });
 };

@@ -1,0 +1,18 @@
+/**
+ * What a files worker writes into a correlation's folder for routes other than its page, besides the downloads
+ * and the page parts (src/loaders/correlationFolder.ts): made once per correlation, off the thread that renders the
+ * pages, and kept with the folder while the entry and the code are unchanged. Names start with a dot, so they stay
+ * out of the output. Now: the correlation's record as handbook.json carries it (handbookEntryFile.ts).
+ */
+import type { HandbookIdentity } from '../../export/index.ts';
+import { HANDBOOK_ENTRY_FILE, handbookEntryFile } from './handbookEntryFile.ts';
+
+/**
+ * @param downloads the folder's downloads, file name → text (correlationFiles)
+ * @param handbook the handbook identity the downloads were made with
+ * @example folderExtras(new Map([['coefficients.json', text]]), identity).map((file) => file.file) // => ['.handbook-entry.json']
+ */
+export function folderExtras(downloads: ReadonlyMap<string, string>, handbook: HandbookIdentity): { file: string; text: string }[] {
+  const coefficients = downloads.get('coefficients.json');
+  return coefficients === undefined ? [] : [{ file: HANDBOOK_ENTRY_FILE, text: handbookEntryFile(coefficients, handbook) }];
+}
