@@ -3,7 +3,7 @@
  * (src/loaders/correlationFolder.ts writeCorrelationFolder, src/loaders/filesWorker.ts): correlationFiles (the
  * downloads), then pageParts (the page's costly parts, from the snippets just built), then forgetStoredFits, for
  * every correlation of the seeded synthetic handbook of bench:build, in this one thread, without Astro and
- * without writing the files. The handbook is fitted once first (in this thread, with a fit cache, as the build
+ * without writing the files (the page parts are timed up to their text, as written). The handbook is fitted once first (in this thread, with a fit cache, as the build
  * does), and each stored entry is made as the content loader makes it (src/loaders/correlationLoader.ts: the fit,
  * order selection and points are references to the fit cache; parsed by the collection's schema; cloned as a
  * worker receives it). Prints wall time per phase and CPU time (process.cpuUsage) per pass and per correlation;
@@ -11,9 +11,10 @@
  *
  * With `--baseline DIR` (another checkout's root, e.g. `git archive main src package.json | tar -x -C DIR` with
  * node_modules linked) every folder is also built by that checkout's code, so that before and after are measured in
- * the same run under the same load: in the first pass folder by folder (each folder's files, the page parts as the
- * JSON text written, are compared between the two, and the number of identical files is printed), then pass by pass,
- * alternating.
+ * the same run under the same load: in the first pass folder by folder (each folder's files are compared between the
+ * two, the page parts by the value each checkout's page reads back from its text, and the number of identical files
+ * is printed), then pass by pass, alternating. Each checkout fits the handbook into a fit cache of its own first (its
+ * record format may differ).
  *
  * The first pass is the one a build makes (each correlation once, after a warm-up on 50 other correlations); later
  * passes find memos (texHtml's KaTeX markup) filled by the earlier ones, so they flatter code that memoizes.
@@ -54,15 +55,26 @@ interface Code {
   readonly snippetKinds: (slug: string) => readonly { kind: string; file: string }[];
   readonly pagePartsFile: string;
   readonly forgetStoredFits: () => void;
+  /** The page parts' text as writeCorrelationFolder writes it (pagePartsText), where the checkout has it… */
+  readonly pagePartsText?: (entry: CorrelationEntry, downloads: ReadonlyMap<string, string>) => string;
+  /** …and as it wrote it before (the cache's JSON). */
+  readonly toCacheJson: (value: unknown) => string;
+  /** The page parts' value from their text, as the page reads it. */
+  readonly readPageParts: (text: string) => unknown;
+  /** The checkout's stored entries (each fitted into its own fit cache, in its own record format). */
+  jobs: Job[];
 }
 
 async function load(name: string, root: string): Promise<Code> {
   const at = (...parts: string[]) => pathToFileURL(path.join(root, 'src', ...parts)).href;
-  const [files, parts, snippets, stored] = await Promise.all([
+  const [files, parts, snippets, stored, folder, cache, packed] = await Promise.all([
     import(at('components', 'lib', 'correlationFiles.ts')),
     import(at('components', 'lib', 'pageParts.ts')),
     import(at('components', 'lib', 'entrySnippets.ts')),
     import(at('load', 'storedFit.ts')),
+    import(at('loaders', 'correlationFolder.ts')),
+    import(at('load', 'fitCache.ts')),
+    import(at('load', 'packedJson.ts')).catch(() => undefined),
   ]);
   return {
     name,
@@ -71,6 +83,10 @@ async function load(name: string, root: string): Promise<Code> {
     snippetKinds: snippets.snippetKinds,
     pagePartsFile: parts.PAGE_PARTS_FILE,
     forgetStoredFits: stored.forgetStoredFits,
+    pagePartsText: folder.pagePartsText,
+    toCacheJson: cache.toCacheJson,
+    readPageParts: packed?.fromPackedJson ?? cache.fromCacheJson,
+    jobs: [],
   };
 }
 
@@ -79,15 +95,19 @@ function folder(code: Code, entry: CorrelationEntry, handbook: HandbookIdentity,
   const a = performance.now();
   const files = code.correlationFiles(entry, handbook);
   const b = performance.now();
-  const texts = new Map(files.map((file) => [file.file, file.text]));
-  const snippets = Object.fromEntries(code.snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
-  const parts = { file: code.pagePartsFile, text: JSON.stringify(code.pageParts(entry, snippets)) };
+  let text: string;
+  if (code.pagePartsText !== undefined) text = code.pagePartsText(entry, new Map(files.map((file) => [file.file, file.text])));
+  else {
+    const texts = new Map(files.map((file) => [file.file, file.text]));
+    const snippets = Object.fromEntries(code.snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
+    text = code.toCacheJson(code.pageParts(entry, snippets));
+  }
   const c = performance.now();
   // As the files worker does after each folder: the fit records read are not kept.
   code.forgetStoredFits();
   figures.files += b - a;
   figures.parts += c - b;
-  return [...files, parts];
+  return [...files, { file: code.pagePartsFile, text }];
 }
 
 interface Figures {
@@ -108,7 +128,7 @@ interface Job {
 }
 
 /** One pass over every folder: wall ms per phase, and CPU and wall ms of the pass. */
-function pass(code: Code, jobs: readonly Job[]): Figures {
+function pass(code: Code, jobs: readonly Job[] = code.jobs): Figures {
   const figures: Figures = { files: 0, parts: 0, cpu: 0, wall: 0 };
   const wallStart = performance.now();
   const cpuStart = cpuMs();
@@ -129,12 +149,13 @@ interface Comparison {
  * The first pass: every folder built by each checkout in turn (which goes first alternates), its files compared and
  * dropped (kept, they would make every later collection slower), CPU and wall ms counted per folder and checkout.
  */
-function firstPass(codes: readonly Code[], jobs: readonly Job[]): { figures: Map<string, Figures>; comparison: Comparison } {
+function firstPass(codes: readonly Code[]): { figures: Map<string, Figures>; comparison: Comparison } {
   const figures = new Map(codes.map((code) => [code.name, { files: 0, parts: 0, cpu: 0, wall: 0 } as Figures]));
   const comparison: Comparison = { total: 0, identical: 0, differing: new Map() };
-  jobs.forEach(({ entry, handbook }, i) => {
+  codes[0]!.jobs.forEach((_, i) => {
     const built = new Map<string, File[]>();
     for (const code of i % 2 === 0 ? codes : [...codes].reverse()) {
+      const { entry, handbook } = code.jobs[i]!;
       const mine = figures.get(code.name)!;
       const wallStart = performance.now();
       const cpuStart = cpuMs();
@@ -146,10 +167,20 @@ function firstPass(codes: readonly Code[], jobs: readonly Job[]): { figures: Map
     const after = built.get('current');
     if (before === undefined || after === undefined) return;
     const theirs = new Map(after.map((file) => [file.file, file.text]));
+    const [baseline, current] = codes.map((code) => code.name);
+    const code = (name: string | undefined) => codes.find((item) => item.name === name)!;
     for (const name of new Set([...before.map((file) => file.file), ...theirs.keys()])) {
       comparison.total++;
       const text = before.find((file) => file.file === name)?.text;
-      if (text !== undefined && text === theirs.get(name)) comparison.identical++;
+      const other = theirs.get(name);
+      // The page parts may be written in another format: compared as what the page reads back (the value, written
+      // out by the baseline's cache JSON, which keeps NaN, ±Infinity, −0 and the order of keys).
+      const same =
+        text !== undefined && other !== undefined &&
+        (text === other ||
+          (name === code(current).pagePartsFile &&
+            code(baseline).toCacheJson(code(baseline).readPageParts(text)) === code(baseline).toCacheJson(code(current).readPageParts(other))));
+      if (same) comparison.identical++;
       else comparison.differing.set(name, (comparison.differing.get(name) ?? 0) + 1);
     }
   });
@@ -157,14 +188,14 @@ function firstPass(codes: readonly Code[], jobs: readonly Job[]): { figures: Map
 }
 
 /** The stored entries of the handbook, made as src/loaders/correlationLoader.ts makes them, with their identities. */
-async function storedJobs(content: string, cacheDirectory: string): Promise<Job[]> {
-  const src = (...parts: string[]) => pathToFileURL(path.join(repository, 'src', ...parts)).href;
+async function storedJobs(content: string, cacheDirectory: string, root: string): Promise<Job[]> {
+  const src = (...parts: string[]) => pathToFileURL(path.join(root, 'src', ...parts)).href;
   const { fitHandbook, handbookHistory, readHandbookSettings } = (await import(src('load', 'index.ts'))) as typeof import('../../src/load/index.ts');
   const { fitCodeVersion } = (await import(src('load', 'fitCodeVersion.ts'))) as typeof import('../../src/load/fitCodeVersion.ts');
   const { correlationEntrySchema, handbookSettingsSchema } = (await import(src('schema', 'index.ts'))) as typeof import('../../src/schema/index.ts');
   const { identityOf } = (await import(src('components', 'lib', 'identityOf.ts'))) as typeof import('../../src/components/lib/identityOf.ts');
   const { storedEntry } = (await import(src('loaders', 'storedEntry.ts'))) as typeof import('../../src/loaders/storedEntry.ts');
-  const fitCache = { directory: cacheDirectory, version: fitCodeVersion(repository) };
+  const fitCache = { directory: cacheDirectory, version: fitCodeVersion(root) };
   const handbook = await fitHandbook(content, { fitCache });
   const histories = await handbookHistory(content, handbook.datasets);
   // The site address and base path of astro.config.mjs: the settings' (bench:build sets no override).
@@ -191,23 +222,28 @@ async function main(): Promise<void> {
     // WARM_UP more correlations than measured (indices count, count + 1, …): the warm-up runs on them, so that no
     // memo (e.g. texHtml's) holds a measured correlation before its first pass.
     await writeSyntheticHandbook(content, { count: count + WARM_UP, seed });
-    const fitStarted = performance.now();
-    const all = await storedJobs(content, path.join(work, 'correlary-fits'));
-    const index = (job: Job) => Number(job.entry.slug.replace(/^synthetic-/, ''));
-    const jobs = all.filter((job) => index(job) < count);
-    const warmUp = all.filter((job) => index(job) >= count);
-    const fitSeconds = (performance.now() - fitStarted) / 1000;
     const codes: Code[] = [];
     if (baselineRoot !== '' && only !== 'current') codes.push(await load('baseline', path.resolve(baselineRoot)));
     if (only !== 'baseline') codes.push(await load('current', repository));
+    const index = (job: Job) => Number(job.entry.slug.replace(/^synthetic-/, ''));
+    const fitStarted = performance.now();
+    const warmUps = new Map<string, Job[]>();
+    for (const code of codes) {
+      // Each checkout fits the handbook into a fit cache of its own: each reads records in its own format.
+      const all = await storedJobs(content, path.join(work, `correlary-fits-${code.name}`), code.name === 'current' ? repository : path.resolve(baselineRoot));
+      code.jobs = all.filter((job) => index(job) < count);
+      warmUps.set(code.name, all.filter((job) => index(job) >= count));
+    }
+    const fitSeconds = (performance.now() - fitStarted) / 1000;
+    const jobs = codes[0]!.jobs;
     console.log(`bench:files: ${jobs.length} folders of synthetic correlations (seed ${seed}; fitted in ${fitSeconds.toFixed(1)} s), one thread, node ${process.version}`);
 
     // Warm-up on other correlations; the first pass compares the files; then the other passes, alternating.
-    for (const code of codes) pass(code, warmUp);
-    const first = firstPass(codes, jobs);
+    for (const code of codes) pass(code, warmUps.get(code.name)!);
+    const first = firstPass(codes);
     const results = new Map<string, Figures[]>(codes.map((code) => [code.name, [first.figures.get(code.name)!]]));
     for (let round = 1; round < passes; round++) {
-      for (const code of round % 2 === 0 ? codes : [...codes].reverse()) results.get(code.name)!.push(pass(code, jobs));
+      for (const code of round % 2 === 0 ? codes : [...codes].reverse()) results.get(code.name)!.push(pass(code));
     }
     console.log('| code | pass | correlationFiles s | pageParts s | pass CPU s | pass wall s | CPU ms per correlation |');
     console.log('|---|---:|---:|---:|---:|---:|---:|');

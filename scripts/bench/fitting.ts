@@ -7,7 +7,8 @@
  * With `--baseline DIR` (another checkout's root, e.g. `git archive main src package.json | tar -x -C DIR` with
  * node_modules linked) the same datasets are also fitted by that checkout's code, passes alternating, so before and
  * after are measured in the same run under the same load; the cache records of both are compared byte for byte
- * (their JSON text) and the number of identical records is printed.
+ * (their JSON text), as made and as read back from the files each wrote, and the numbers of identical records are
+ * printed.
  *
  * Run: npm run bench:fitting -- [--count 1000] [--seed 1] [--passes 2] [--baseline DIR] [--only current|baseline]
  * A V8 profile: node --cpu-prof --cpu-prof-dir=DIR --import tsx scripts/bench/fitting.ts --count 1000 --passes 1
@@ -37,12 +38,13 @@ interface Code {
   readonly cacheRecord: (correlation: Correlation, fitted: unknown) => unknown;
   readonly writeCachedFit: (directory: string, key: string, record: unknown) => void;
   readonly toCacheJson: (value: unknown) => string;
+  readonly readCachedFit: (directory: string, key: string) => unknown;
 }
 
 async function load(name: string, root: string): Promise<Code> {
   const at = (file: string) => pathToFileURL(path.join(root, 'src', 'load', file)).href;
-  const [{ fitDataset }, { cacheRecord }, { writeCachedFit, toCacheJson }] = await Promise.all([import(at('fitDataset.ts')), import(at('cacheRecord.ts')), import(at('fitCache.ts'))]);
-  return { name, fitDataset, cacheRecord, writeCachedFit, toCacheJson };
+  const [{ fitDataset }, { cacheRecord }, { writeCachedFit, toCacheJson, readCachedFit }] = await Promise.all([import(at('fitDataset.ts')), import(at('cacheRecord.ts')), import(at('fitCache.ts'))]);
+  return { name, fitDataset, cacheRecord, writeCachedFit, toCacheJson, readCachedFit };
 }
 
 interface Figures {
@@ -79,6 +81,8 @@ function pass(code: Code, correlations: readonly Correlation[], directory: strin
   });
   figures.cpu = cpuMs() - cpuStart;
   figures.wall = performance.now() - wallStart;
+  // The records as read back (not timed), in the cache's JSON: two checkouts' files may differ in format.
+  if (records) correlations.forEach((_, i) => (records[correlations.length + i] = code.toCacheJson(code.readCachedFit(directory, `${String(i).padStart(64, '0')}`))));
   return figures;
 }
 
@@ -123,8 +127,11 @@ async function main(): Promise<void> {
       console.log(`current/baseline CPU ratio (best pass of each): ${(best('current') / best('baseline')).toFixed(3)}`);
       const before = records.get('baseline')!;
       const after = records.get('current')!;
-      const identical = before.filter((text, i) => text === after[i]).length;
-      console.log(`cache records identical to the baseline's: ${identical} of ${before.length}`);
+      const n = correlations.length;
+      const identical = before.slice(0, n).filter((text, i) => text === after[i]).length;
+      console.log(`cache records identical to the baseline's: ${identical} of ${n}`);
+      const readBack = before.slice(n).filter((text, i) => text === after[n + i]).length;
+      console.log(`cache records read back from their files identical to the baseline's: ${readBack} of ${n}`);
     }
   } finally {
     await rm(work, { recursive: true, force: true });

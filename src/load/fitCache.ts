@@ -11,13 +11,16 @@
  * pages read the fit, its order table, the previews and the data rows from here (src/load/storedFit.ts), which
  * keeps Astro's store, and the JavaScript module Astro bundles it into, small.
  *
- * Beside each record, `<key>.summary.json` holds the fit and its order selection without the fit's per-point
- * statistics, and none of the record's other large parts (the data rows, the previews): what reading and fitting
- * needs on a cache hit (fingerprint, order, criterion, messages) and what the pages and exports show of the fit
- * (its order table included). A hit reads only the summary, and so does a correlation page, whose data table and
- * previews come with its page parts (src/components/lib/pageParts.ts); the per-point statistics are read from the
- * full record the first time something asks for them (readCachedSummary). At N = 1000 this keeps a build from
- * parsing about 50 KB of JSON per dataset where 15 KB serve.
+ * Each record is one file of two parts. Its first line is the summary: the fit and its order selection without the
+ * fit's per-point statistics, and none of the record's other large parts (the data rows, the previews), as JSON
+ * (cacheJson.ts): what reading and fitting needs on a cache hit (fingerprint, order, criterion, messages) and what
+ * the pages and exports show of the fit (its order table included). A hit parses only that line, and so does a
+ * correlation page, whose data table and previews come with its page parts (src/components/lib/pageParts.ts); the
+ * per-point statistics are read from the whole record the first time something asks for them (readCachedSummary).
+ * The data rows and the previews follow on the second line, then the fit's per-point statistics, packed
+ * (packedJson.ts: each array of numbers as its doubles in base64), which is several times cheaper to write and read
+ * back than JSON's 17-digit text and keeps every double bit for bit. One file, written once: before format 4 the
+ * summary was a second file, and the record repeated it.
  *
  * JSON has no NaN, ±Infinity or −0; they are written as {"$number": "NaN"} and restored on reading, so a cached
  * fit equals a fresh one.
@@ -25,12 +28,17 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
+import { threadId } from 'node:worker_threads';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
 import type { PolynomialFit } from '../core/index.ts';
 import type { DataPoint } from '../schema/index.ts';
 import type { DatasetFit } from './fitDataset.ts';
 import type { LoadedCorrelation } from './types.ts';
 import { pruneKeyedFiles } from './pruneKeyedFiles.ts';
+import { fromCacheJson, toCacheJson } from './cacheJson.ts';
+import { fromPackedJson, toPackedJson } from './packedJson.ts';
+
+export { fromCacheJson, toCacheJson };
 
 /** One cache file: the dataset's fit, the previews of its other orders, and every data row (for the pages). */
 export interface CachedFit extends DatasetFit {
@@ -41,7 +49,7 @@ export interface CachedFit extends DatasetFit {
 }
 
 /** Bumped when the layout of a cache file changes. */
-const CACHE_FORMAT = 3;
+const CACHE_FORMAT = 4;
 
 /** Where fits are cached and under which code version. */
 export interface FitCache {
@@ -49,70 +57,6 @@ export interface FitCache {
   readonly directory: string;
   /** The fitting code's version (fitCodeVersion): a change invalidates every entry. */
   readonly version: string;
-}
-
-const NUMBER_TAG = '$number';
-
-function replacer(_key: string, value: unknown): unknown {
-  if (typeof value === 'number' && (!Number.isFinite(value) || Object.is(value, -0))) return { [NUMBER_TAG]: Object.is(value, -0) ? '-0' : String(value) };
-  return value;
-}
-
-function reviver(_key: string, value: unknown): unknown {
-  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-    const keys = Object.keys(value);
-    if (keys.length === 1 && keys[0] === NUMBER_TAG) return Number((value as Record<string, string>)[NUMBER_TAG]);
-  }
-  return value;
-}
-
-/**
- * True when the replacer could change what JSON.stringify writes for `value`: it holds a number JSON has no text for
- * (NaN, ±Infinity, −0), or an object with a toJSON method (whose result the scan does not follow), or it nests deeper
- * than the scan goes. Visits what JSON.stringify visits: array elements and own enumerable string keys.
- */
-function needsReplacer(value: unknown, depth: number): boolean {
-  if (typeof value === 'number') return !Number.isFinite(value) || Object.is(value, -0);
-  if (value === null || typeof value !== 'object') return false;
-  if (depth > 200 || typeof (value as { toJSON?: unknown }).toJSON === 'function') return true;
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) if (needsReplacer(value[i], depth + 1)) return true;
-    return false;
-  }
-  for (const key of Object.keys(value)) if (needsReplacer((value as Record<string, unknown>)[key], depth + 1)) return true;
-  return false;
-}
-
-/**
- * JSON text of any plain value, keeping NaN, ±Infinity and −0. The replacer returns every other value unchanged, so a
- * value without such numbers is written by JSON.stringify alone (same text, without a call back per value).
- * @example toCacheJson([NaN]) // => '[{"$number":"NaN"}]'
- */
-export function toCacheJson(value: unknown): string {
-  return needsReplacer(value, 0) ? JSON.stringify(value, replacer) : JSON.stringify(value);
-}
-
-/**
- * Tagged numbers JSON itself can spell: a number too large for a double parses as ±Infinity, and "-0" as −0
- * (ECMA-262 JSON.parse reads numbers as StringToNumber does). A tag can only stand where a value does (inside a
- * string its quotes would be escaped), so replacing its text by the number's is exact.
- */
-const SPELLED: readonly (readonly [string, string])[] = [
-  [`{"${NUMBER_TAG}":"Infinity"}`, '1e999'],
-  [`{"${NUMBER_TAG}":"-Infinity"}`, '-1e999'],
-  [`{"${NUMBER_TAG}":"-0"}`, '-0'],
-];
-
-/**
- * The value back from toCacheJson's text. Text without a tagged number is parsed without a reviver (fast path);
- * ±Infinity and −0 are spelled as JSON numbers first, so only text holding a NaN needs the reviver (a reviver
- * call per value makes parsing several times slower).
- */
-export function fromCacheJson(text: string): unknown {
-  if (!text.includes(`"${NUMBER_TAG}"`)) return JSON.parse(text);
-  let spelled = text;
-  for (const [tag, number] of SPELLED) spelled = spelled.replaceAll(tag, number);
-  return spelled.includes(`"${NUMBER_TAG}"`) ? JSON.parse(text, reviver) : JSON.parse(spelled);
 }
 
 /**
@@ -139,11 +83,7 @@ function fileOf(directory: string, key: string): string {
   return path.join(directory, `${key}.json`);
 }
 
-function summaryFileOf(directory: string, key: string): string {
-  return path.join(directory, `${key}.summary.json`);
-}
-
-/** The fit without fit.points, the order selection and the messages (what a summary file holds). */
+/** The fit without fit.points, the order selection and the messages (the record's first line). */
 function summaryOf(record: CachedFit): DatasetFit {
   const { points: _points, ...fit } = record.fit ?? ({} as PolynomialFit);
   return {
@@ -153,32 +93,85 @@ function summaryOf(record: CachedFit): DatasetFit {
   };
 }
 
+/** What a record holds besides its summary and fit.points (its second line). */
+interface RecordRest {
+  /** The place of fit.points among the keys of the fit that JSON writes (so that the fit comes back in order). */
+  readonly fitPointsAt?: number;
+  readonly points: readonly DataPoint[];
+  readonly previews: OrderPreviews | null;
+}
+
+function restOf(record: CachedFit): RecordRest {
+  const fit = record.fit as unknown as Record<string, unknown> | undefined;
+  if (fit?.['points'] === undefined) return { points: record.points, previews: record.previews };
+  let fitPointsAt = 0;
+  for (const key of Object.keys(fit)) {
+    if (key === 'points') break;
+    if (fit[key] !== undefined) fitPointsAt++;
+  }
+  return { fitPointsAt, points: record.points, previews: record.previews };
+}
+
+/**
+ * The record's text, in three parts: the summary (cacheJson.ts) on the first line; the data rows and the previews
+ * (cacheJson.ts) on the second; then fit.points, packed (packedJson.ts: its arrays of full-precision doubles are the
+ * costly part of a record's JSON). The rows and the previews stay JSON: their numbers are short (as written in the
+ * data file; rounded for drawing), which V8 writes and reads about as fast as any packed form, and a walk over the
+ * rows' objects would cost more than it saves.
+ */
+function recordText(record: CachedFit): string {
+  return `${toCacheJson(summaryOf(record))}\n${toCacheJson(restOf(record))}\n${toPackedJson(record.fit?.points ?? null)}`;
+}
+
+/** The record of a recordText. */
+function recordOf(text: string): CachedFit {
+  const first = text.indexOf('\n');
+  const second = first < 0 ? -1 : text.indexOf('\n', first + 1);
+  if (second < 0) throw new Error('recordOf requires a summary line and a line of data rows');
+  const summary = fromCacheJson(text.slice(0, first)) as DatasetFit;
+  const rest = fromCacheJson(text.slice(first + 1, second)) as RecordRest;
+  const fitPoints = fromPackedJson(text.slice(second + 1)) as PolynomialFit['points'] | null;
+  let fit = summary.fit;
+  if (fit !== undefined && rest.fitPointsAt !== undefined) {
+    const keys = Object.keys(fit);
+    const whole: Record<string, unknown> = {};
+    keys.forEach((key, i) => {
+      if (i === rest.fitPointsAt) whole['points'] = fitPoints;
+      whole[key] = (fit as unknown as Record<string, unknown>)[key];
+    });
+    if (rest.fitPointsAt === keys.length) whole['points'] = fitPoints;
+    fit = whole as unknown as PolynomialFit;
+  }
+  // The keys JSON kept, in the order written.
+  const record: Record<string, unknown> = {};
+  if (fit !== undefined) record['fit'] = fit;
+  if (summary.selection !== undefined) record['selection'] = summary.selection;
+  if (summary.diagnostics !== undefined) record['diagnostics'] = summary.diagnostics;
+  if (rest.points !== undefined) record['points'] = rest.points;
+  if (rest.previews !== undefined) record['previews'] = rest.previews;
+  return record as unknown as CachedFit;
+}
+
 function writeAtomically(target: string, text: string): void {
-  const temporary = `${target}.${process.pid}.tmp`;
+  const temporary = `${target}.${process.pid}-${threadId}.tmp`;
   writeFileSync(temporary, text);
   renameSync(temporary, target);
 }
 
 /**
- * The fit, order selection and messages under `key`, read from the small summary file; `fit.points` is read from
- * the full record only when first asked for. Undefined when the cache does not
- * hold the key (or a file cannot be read); a record without a summary (written before summaries existed) is read in
- * full and its summary written.
+ * The fit, order selection and messages under `key`, from the first line of its record; `fit.points` is read from
+ * the whole record only when first asked for. Undefined when the cache does not hold the key (or it cannot be read).
  * @example readCachedSummary(cache.directory, key)?.fit?.order // => 2
  */
 export function readCachedSummary(directory: string, key: string): DatasetFit | undefined {
   let summary: DatasetFit;
   try {
-    summary = fromCacheJson(readFileSync(summaryFileOf(directory, key), 'utf8')) as DatasetFit;
+    const bytes = readFileSync(fileOf(directory, key));
+    const end = bytes.indexOf(10); // the line break after the summary
+    if (end < 0) return undefined;
+    summary = fromCacheJson(bytes.toString('utf8', 0, end)) as DatasetFit;
   } catch {
-    const full = readCachedFit(directory, key);
-    if (full === undefined) return undefined;
-    try {
-      writeAtomically(summaryFileOf(directory, key), toCacheJson(summaryOf(full)));
-    } catch {
-      // a read-only cache still serves the full record
-    }
-    return { fit: full.fit, selection: full.selection, diagnostics: full.diagnostics };
+    return undefined; // a damaged file is refitted and rewritten
   }
   let full: CachedFit | undefined;
   const record = (): CachedFit => {
@@ -230,31 +223,34 @@ export function readCachedRecord(directory: string, key: string): { record: Cach
     return undefined;
   }
   try {
-    return { record: fromCacheJson(text) as CachedFit, size: text.length };
+    return { record: recordOf(text), size: text.length };
   } catch {
     return undefined; // a damaged file is refitted and rewritten
   }
 }
 
-/** Store a record under `key`; written to a temporary name and renamed, so a reader never sees half a file. */
+/**
+ * Store a record under `key`, in one file: written to a temporary name and renamed, so a reader never sees half a
+ * file. The folder is created when a write finds it missing (not checked before every write: a build writes many
+ * records into the same folder).
+ * @example writeCachedFit(cache.directory, key, cacheRecord(correlation, fitDataset(correlation)))
+ */
 export function writeCachedFit(directory: string, key: string, fitted: CachedFit): void {
-  const record = toCacheJson(fitted);
-  // The record first: a summary is only ever found beside its record. The folder is created when a write finds it
-  // missing (not checked before every write: a build writes many records into the same folder).
+  const text = recordText(fitted);
   try {
-    writeAtomically(fileOf(directory, key), record);
+    writeAtomically(fileOf(directory, key), text);
   } catch (caught) {
     if ((caught as NodeJS.ErrnoException).code !== 'ENOENT') throw caught;
     mkdirSync(directory, { recursive: true });
-    writeAtomically(fileOf(directory, key), record);
+    writeAtomically(fileOf(directory, key), text);
   }
-  writeAtomically(summaryFileOf(directory, key), toCacheJson(summaryOf(fitted)));
 }
 
 /**
  * Delete the records of a cache folder whose keys are not in `keep` (what a handbook no longer uses: older versions
  * of changed datasets, removed folders, an older fitting code), so the folder does not grow with every edit. Only
- * files named like records or their summaries (64 hex digits, .json or .summary.json) are touched.
+ * files named like records (64 hex digits, .json) or the summaries that format 3 wrote beside them (.summary.json)
+ * are touched.
  * @example pruneFitCache(cache.directory, new Set(keys)) // => 3 (records deleted)
  */
 export function pruneFitCache(directory: string, keep: ReadonlySet<string>): number {

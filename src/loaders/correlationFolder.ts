@@ -8,7 +8,7 @@ import { correlationFiles } from '../components/lib/correlationFiles.ts';
 import { snippetKinds } from '../components/lib/entrySnippets.ts';
 import { PAGE_PARTS_FILE, pageParts } from '../components/lib/pageParts.ts';
 import { folderExtras } from '../components/lib/folderExtras.ts';
-import { toCacheJson } from '../load/fitCache.ts';
+import { toPackedJson } from '../load/packedJson.ts';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
@@ -22,19 +22,37 @@ export const DIGEST_FILE = '.digest';
  * hard links to them (src/loaders/linkOrCopy.ts). The file calls are synchronous: in a files worker they cost a
  * third of the CPU of the same calls through node:fs/promises (measured: 5500 files of 15 KB, 0.1 s against
  * 0.3 s), and they queue nothing on Node's I/O threads, which the main thread's own file work shares.
- * @example await writeCorrelationFolder('.astro/correlary-files/water-cp', entry, identity, digest) // => 7 (files)
+ * @example await writeCorrelationFolder('.astro/correlary-files/water-cp', entry, identity, digest) // => 9 (files, without the digest)
  */
 export async function writeCorrelationFolder(target: string, entry: CorrelationEntry, handbook: HandbookIdentity, digest: string): Promise<number> {
   rmSync(target, { recursive: true, force: true });
   mkdirSync(target, { recursive: true });
-  const files = correlationFiles(entry, handbook);
-  // The page's costly parts, built here beside the downloads (its snippets are these files), not published.
-  const texts = new Map(files.map((file) => [file.file, file.text]));
-  const snippets = Object.fromEntries(snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, texts.get(kind.file)!]));
-  // The cache's JSON: the data table's diagnostics may hold NaN or ±Infinity, which JSON.stringify would write as null.
-  const parts = { file: PAGE_PARTS_FILE, text: toCacheJson(pageParts(entry, snippets)) };
-  for (const file of [...files, parts, ...folderExtras(texts, handbook)]) writeFileSync(path.join(target, file.file), file.text, { flag: 'wx' });
+  const files = correlationFolderFiles(entry, handbook);
+  for (const file of files) writeFileSync(path.join(target, file.file), file.text, { flag: 'wx' });
   // Last: a folder left half-written by a failed build has no digest and is written again.
   writeFileSync(path.join(target, DIGEST_FILE), digest, { flag: 'wx' });
   return files.length;
+}
+
+/**
+ * The files of a correlation's folder (without its digest): the downloads (correlationFiles), the page parts, and
+ * what other routes take from the folder (folderExtras).
+ * @example correlationFolderFiles(entry, identity).map((file) => file.file) // => ['coefficients.json', …, '.page.json', '.handbook-entry.json']
+ */
+export function correlationFolderFiles(entry: CorrelationEntry, handbook: HandbookIdentity): { file: string; text: string }[] {
+  const files = correlationFiles(entry, handbook);
+  const texts = new Map(files.map((file) => [file.file, file.text]));
+  return [...files, { file: PAGE_PARTS_FILE, text: pagePartsText(entry, texts) }, ...folderExtras(texts, handbook)];
+}
+
+/**
+ * The text of the page's costly parts (pageParts), built beside the downloads (its snippets are these files), not
+ * published: packed JSON (src/load/packedJson.ts), the markup and snippet texts raw after the JSON (its data table's
+ * diagnostics may hold NaN or ±Infinity, which JSON.stringify would write as null: packed JSON keeps them).
+ * @param downloads the folder's downloads, file name → text (correlationFiles)
+ * @example fromPackedJson(pagePartsText(entry, downloads)).katex // => '0.16.…'
+ */
+export function pagePartsText(entry: CorrelationEntry, downloads: ReadonlyMap<string, string>): string {
+  const snippets = Object.fromEntries(snippetKinds(entry.slug).filter((kind) => kind.kind !== 'typescript').map((kind) => [kind.kind, downloads.get(kind.file)!]));
+  return toPackedJson(pageParts(entry, snippets));
 }

@@ -8,7 +8,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { fromCacheJson } from '../load/fitCache.ts';
+import { fromPackedJson } from '../load/packedJson.ts';
 import type { StoredFitReference } from '../load/storedFit.ts';
 import { correlationFilesFolder } from './correlationFilesFolder.ts';
 
@@ -17,7 +17,8 @@ const folders = new Map<string, string>();
 let last: { file: string; value: unknown } | undefined;
 
 /**
- * The JSON value of `file` in the correlation's folder, or undefined when it is not there or does not parse.
+ * The value of `file` (packed JSON, src/load/packedJson.ts) in the correlation's folder, or undefined when it is not
+ * there or does not parse.
  * @param reference the entry's stored fit reference (its folder's parent is Astro's cache folder)
  * @example writtenPageParts(entry.fit, 'water-cp', '.page.json') // => { katex: '0.16.…', … }
  */
@@ -32,7 +33,7 @@ export function writtenPageParts(reference: StoredFitReference, slug: string, fi
   if (last?.file === full) return last.value;
   let value: unknown;
   try {
-    value = fromCacheJson(readFileSync(full, 'utf8'));
+    value = fromPackedJson(readFileSync(full, 'utf8'));
   } catch {
     value = undefined;
   }

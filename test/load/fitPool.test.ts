@@ -69,7 +69,7 @@ describe('fitHandbook in worker threads', () => {
       // Only records of folders that are used stay in the cache (none for the three folders in error).
       const used = pooled.datasets.filter((item) => item.fitted?.cacheKey !== undefined).length;
       expect(used).toBe(fresh.datasets.filter((item) => item.fitted !== undefined).length);
-      expect((await readdir(fitCache.directory)).filter((name) => !name.endsWith('.summary.json'))).toHaveLength(used);
+      expect(await readdir(fitCache.directory)).toHaveLength(used);
     }
   });
 
@@ -84,11 +84,11 @@ describe('fitHandbook in worker threads', () => {
     try {
       const second = await fitHandbook(content, { fitCache, prune: true });
       const after = new Set(await readdir(fitCache.directory));
-      const keys = (handbook: typeof first) => new Set(handbook.datasets.flatMap((item) => (item.fitted?.cacheKey ? [`${item.fitted.cacheKey}.json`, `${item.fitted.cacheKey}.summary.json`] : [])));
+      const keys = (handbook: typeof first) => new Set(handbook.datasets.flatMap((item) => (item.fitted?.cacheKey ? [`${item.fitted.cacheKey}.json`] : [])));
       expect(after).toEqual(keys(second));
       expect(after.size).toBe(before.size);
-      // The changed dataset's record and its summary.
-      expect([...before].filter((name) => !after.has(name))).toHaveLength(2);
+      // The changed dataset's record (one file, its summary on the first line).
+      expect([...before].filter((name) => !after.has(name))).toHaveLength(1);
     } finally {
       await writeFile(csvPath, csv);
     }

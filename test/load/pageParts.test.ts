@@ -1,9 +1,9 @@
 /**
  * A correlation page reads what it shows of the fit record's large parts (its data table, the previews'
  * statistics, whether a point states an uncertainty) from the page parts written with its downloads, through the
- * cache's JSON (src/loaders/correlationFolder.ts, src/loaders/writtenDownload.ts). Checked on every correlation of
- * the demo handbook: what the page reads back is exactly what the components compute from the full record in this
- * thread (the path `astro dev` and tests take), NaN, ±Infinity and −0 included.
+ * cache's packed JSON (src/loaders/correlationFolder.ts, src/loaders/writtenDownload.ts, src/load/packedJson.ts).
+ * Checked on every correlation of the demo handbook: what the page reads back is exactly what the components compute
+ * from the full record in this thread (the path `astro dev` and tests take), NaN, ±Infinity and −0 included.
  */
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
@@ -11,11 +11,15 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataTableView } from '../../src/components/lib/dataRows.ts';
 import { fitOf, pointsOf, previewsOf, selectionOf } from '../../src/components/lib/entryView.ts';
-import { pageParts } from '../../src/components/lib/pageParts.ts';
+import { PAGE_PARTS_FILE, pageParts, type PageParts } from '../../src/components/lib/pageParts.ts';
 import { previewView } from '../../src/components/lib/previewView.ts';
 import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
 import { forgetStoredFits } from '../../src/load/storedFit.ts';
-import { fromCacheJson, toCacheJson } from '../../src/load/fitCache.ts';
+import { toCacheJson } from '../../src/load/fitCache.ts';
+import { fromPackedJson } from '../../src/load/packedJson.ts';
+import { correlationFolderFiles } from '../../src/loaders/correlationFolder.ts';
+import { identityOf } from '../../src/components/lib/identityOf.ts';
+import { handbookSettingsSchema } from '../../src/schema/index.ts';
 import { storedEntry } from '../../src/loaders/storedEntry.ts';
 import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
 
@@ -39,15 +43,20 @@ afterAll(async () => {
 describe('page parts', () => {
   it('what a page reads back from its parts equals what the components compute from the full record', () => {
     expect(entries.length).toBeGreaterThan(10);
+    const settings = handbookSettingsSchema.parse({});
     for (const entry of entries) {
-      const parts = pageParts(entry, {});
-      const read = fromCacheJson(toCacheJson(parts)) as typeof parts;
+      // The text the folder writer writes, read back as the page reads it.
+      const text = correlationFolderFiles(entry, identityOf(entry.slug, settings, settings.basePath, settings.url)).find((file) => file.file === PAGE_PARTS_FILE)!.text;
+      const read = fromPackedJson(text) as PageParts;
+      const parts = pageParts(entry, read.snippets);
       const fit = fitOf(entry)!;
       const selection = selectionOf(entry);
       expect(read.dataTable, entry.slug).toEqual(dataTableView(entry, fit));
       expect(read.previews, entry.slug).toEqual(previewView(previewsOf(entry, fit, selection)));
       expect(read.uncertainty, entry.slug).toBe(pointsOf(entry).some((point) => point.uncertainty !== undefined));
       expect(read, entry.slug).toEqual(parts);
+      // Bit for bit and key for key: the text the cache's JSON (cacheJson.ts) writes of both is the same.
+      expect(toCacheJson(read), entry.slug).toBe(toCacheJson(parts));
     }
   });
 

@@ -1,5 +1,5 @@
 /**
- * storedFitSummary: the fit that lists and overlays read from the fit cache's summary file is the full record's
+ * storedFitSummary: the fit that lists and overlays read from the fit cache record's summary (its first line) is the full record's
  * fit (the independent computation is the full record read through storedFit), whether or not the record is kept
  * in memory, and its per-point statistics are still there when asked for. A correlation page and the exports read
  * only the summary: the fit without per-point statistics and the order selection with its order table.
@@ -46,7 +46,8 @@ describe('storedFitSummary', () => {
     const recordFile = path.join(fitCache.directory, `${fitted.cacheKey}.json`);
     const recordText = await readFile(recordFile, 'utf8');
     forgetStoredFits();
-    await writeFile(recordFile, '{ damaged');
+    // The summary line intact, the rest of the record damaged.
+    await writeFile(recordFile, `${recordText.slice(0, recordText.indexOf('\n') + 1)}{ damaged`);
     try {
       const fit = storedFitSummary(reference)!;
       expect(fit.printedCoefficients).toEqual(fitted.fit!.printedCoefficients);
