@@ -34,11 +34,22 @@ export function storedCorrelations(): StoredCorrelations | undefined {
 }
 
 /**
- * How many of `digests` the store file's text does not hold.
+ * How many of `digests` the store file's text does not hold. Astro's store file is devalue's flattened form: one
+ * JSON array whose elements are every distinct value, each string (a digest among them) an element of its own; so
+ * one parse and a set of those strings answer for every digest (a text search per digest cost 0.22 s of the
+ * N = 1000 bench build). A text that does not parse as an array holds none of them.
  * @example missingDigests('[["Map",1],{"digest":2},"a1b2"]', ['a1b2', 'c3d4']) // => 1
  */
 export function missingDigests(storeText: string, digests: readonly string[]): number {
+  let values: unknown;
+  try {
+    values = JSON.parse(storeText);
+  } catch {
+    return digests.length;
+  }
+  if (!Array.isArray(values)) return digests.length;
+  const strings = new Set<unknown>(values.filter((value) => typeof value === 'string'));
   let missing = 0;
-  for (const digest of digests) if (!storeText.includes(JSON.stringify(digest))) missing++;
+  for (const digest of digests) if (!strings.has(digest)) missing++;
   return missing;
 }

@@ -64,6 +64,9 @@ describe('dataStoreIntegration()', () => {
     const text = JSON.stringify([['Map', 1], 'correlations', { digest: 3 }, '0f1e2d3c4b5a6978']);
     expect(missingDigests(text, ['0f1e2d3c4b5a6978'])).toBe(0);
     expect(missingDigests(text, ['0f1e2d3c4b5a6978', 'ffffffffffffffff', '0f1e2d3c'])).toBe(2);
+    // A digest that occurs only inside another string, or a text that is not a store, does not count as held.
+    expect(missingDigests(JSON.stringify([['Map', 1], 'x 0f1e2d3c4b5a6978 y']), ['0f1e2d3c4b5a6978'])).toBe(1);
+    expect(missingDigests('[["Map",1],"0f1e2d3c4b5a6978"', ['0f1e2d3c4b5a6978'])).toBe(1);
   });
 
   it('a store file that lacks entries the loader stored is saved again by Astro before it is bundled, or stops the build', async () => {
