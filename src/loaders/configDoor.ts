@@ -13,5 +13,6 @@ export { readHandbookSettings } from '../load/readHandbookSettings.ts';
 export { correlationFilesIntegration } from './correlationFilesIntegration.ts';
 export { dataStoreIntegration } from './dataStoreIntegration.ts';
 export { coreBundleIntegration } from './coreBundleIntegration.ts';
+export { clientScriptsIntegration } from './clientScriptsIntegration.ts';
 export { correlationLoader } from './correlationLoader.ts';
 export { handbookSettingsLoader } from './handbookSettingsLoader.ts';

@@ -431,11 +431,20 @@ describe('the browser only draws', () => {
   it("src/client imports only d3-axis, d3-scale, d3-selection, d3-shape, d3-zoom, minisearch, the shared renderer, the core's browser door and its own files", async () => {
     const directory = path.join(projectRoot, 'src', 'client');
     const offenders: string[] = [];
-    for (const name of await readdir(directory)) {
-      const text = await readFile(path.join(directory, name), 'utf8');
+    // Every file under src/client, the page entries of src/client/entries/ included.
+    const names = (await readdir(directory, { recursive: true })).filter((name) => name.endsWith('.ts'));
+    expect(names).toContain(path.join('entries', 'fitChart.ts'));
+    for (const name of names) {
+      const file = path.join(directory, name);
+      const text = await readFile(file, 'utf8');
       for (const match of text.matchAll(/(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
         const spec = (match[1] ?? match[2])!;
-        if (!(spec.startsWith('./') || spec.startsWith('../render/') || spec === '../core/browser.ts' || ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom', 'minisearch'].includes(spec))) offenders.push(`${name} imports ${spec}`);
+        const target = spec.startsWith('.') ? path.resolve(path.dirname(file), spec) : undefined;
+        const allowed =
+          target === undefined
+            ? ['d3-axis', 'd3-scale', 'd3-selection', 'd3-shape', 'd3-zoom', 'minisearch'].includes(spec)
+            : target.startsWith(`${directory}${path.sep}`) || target.startsWith(`${path.join(projectRoot, 'src', 'render')}${path.sep}`) || target === path.join(projectRoot, 'src', 'core', 'browser.ts');
+        if (!allowed) offenders.push(`${name} imports ${spec}`);
       }
     }
     expect(offenders).toEqual([]);
@@ -449,6 +458,24 @@ describe('the browser only draws', () => {
       expect(html, correlation.slug).toContain(`data-evaluator data-transform-x="${transform.x}" data-transform-y="${transform.y}"`);
       expect(html, correlation.slug).toContain('<code id="snippet-javascript"');
     }
+  });
+
+  // The browser scripts are bundled by Correlary itself (src/loaders/clientScriptsIntegration.ts), not by Astro's client build.
+  it('every page loads its browser scripts from the output under the base path, each once, and a correlation page all four', async () => {
+    const pages = (await readdir(outDir, { recursive: true })).filter((name) => name.endsWith('.html'));
+    const correlationScripts = new Set<string>();
+    for (const name of pages) {
+      const html = await readFile(path.join(outDir, name), 'utf8');
+      const sources = [...html.matchAll(/<script type="module" src="([^"]+)"><\/script>/g)].map((match) => match[1]!);
+      expect(new Set(sources).size, name).toBe(sources.length);
+      for (const source of sources) {
+        expect(source, name).toMatch(new RegExp(`^${escapeRegExp(BASE)}_astro/[A-Za-z]+\\.[A-Z0-9]{8}\\.js$`));
+        expect(existsSync(path.join(outDir, source.slice(BASE.length))), `${name}: ${source}`).toBe(true);
+        if (name.startsWith(`correlations${path.sep}`)) correlationScripts.add(source.replace(/^.*\/_astro\/([A-Za-z]+)\..*$/, '$1'));
+      }
+    }
+    expect([...correlationScripts].sort()).toEqual(['codeSnippets', 'equation', 'fitChart', 'orderPreview']);
+    expect(await readFile(path.join(outDir, 'index.html'), 'utf8')).toMatch(/<script type="module" src="[^"]*\/_astro\/catalogue\.[A-Z0-9]{8}\.js"><\/script>/);
   });
 
   it('the built browser scripts hold none of the numerical core', async () => {
