@@ -123,4 +123,23 @@ describe('architecture', () => {
     }
     expect(offenders).toEqual([]);
   });
+
+  it('no Astro file has a script Astro would bundle: page scripts are entries of src/client/entries/ (clientScript.ts)', () => {
+    // A bare <script> makes Astro run a client build again (0.6–0.8 s of every build, clientScriptsIntegration.ts).
+    const astroFiles = (dir: string): string[] =>
+      readdirSync(dir).flatMap((name) => {
+        const path = join(dir, name);
+        return statSync(path).isDirectory() ? astroFiles(path) : name.endsWith('.astro') ? [path] : [];
+      });
+    const offenders: string[] = [];
+    let tags = 0;
+    for (const file of astroFiles(join(root, 'src'))) {
+      for (const match of readFileSync(file, 'utf8').matchAll(/<script\b[^>]*>/g)) {
+        tags++;
+        if (!/\bis:inline\b/.test(match[0]) && !/type="application\/json"/.test(match[0])) offenders.push(`${relative(root, file)}: ${match[0]}`);
+      }
+    }
+    expect(tags).toBeGreaterThan(5);
+    expect(offenders).toEqual([]);
+  });
 });
