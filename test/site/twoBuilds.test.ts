@@ -151,6 +151,9 @@ describe('content cannot run in a reader’s browser or spreadsheet', () => {
       const text = textOf(document);
       expect(text, `hostile-${index}`).toContain(`${payload} title ${index}`);
       expect(text, `hostile-${index}`).toContain(`${payload} material`);
+      // Rows built ahead as HTML with the downloads (src/components/lib/pageHtml.ts): a data row's note, the statistics' unit.
+      expect(text, `hostile-${index}`).toContain(`${payload} note 5`);
+      expect(text, `hostile-${index}`).toContain(`largest |residual| (${payload} unit)`);
       const svgPath = path.join(dist, 'correlations', `hostile-${index}`, 'plot.svg');
       if (existsSync(svgPath)) expect(textOf(parse(await readFile(svgPath, 'utf8')) as unknown as Node), `hostile-${index} plot.svg`).toContain(`${payload} property`);
       const catalogue = textOf(parse(await readFile(path.join(dist, 'index.html'), 'utf8')) as unknown as Node);
