@@ -3,6 +3,7 @@
  * Astro loader make. Every message from reading and fitting is collected; a folder that could not be read or
  * fitted is kept with `fitted` undefined so callers can say so.
  */
+import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { fitDataset, type DatasetFit } from './fitDataset.ts';
 import { fitCacheKey, hasCachedFit, pruneFitCache, readCachedSummary, writeCachedFit, type FitCache } from './fitCache.ts';
@@ -60,6 +61,28 @@ export interface FitHandbookOptions {
   readonly folderRecords?: { readonly directory: string; readonly version: string };
   /** With a fit cache: afterwards, delete the cache records (and folder records) that no folder of this handbook uses. */
   readonly prune?: boolean;
+}
+
+/**
+ * Start the fitting workers before any folder is read? Yes when there are enough folders for workers and the fit
+ * cache holds fewer records than that: a cold build, where (nearly) every folder will need fitting. The workers then
+ * load their code while the first folders are read (a cold build of 1000 correlations: they started about half a
+ * second after reading did, once 40 folders were waiting). Otherwise (a rebuild, where most folders are unchanged)
+ * they start only once `minimumJobs` folders are found to need fitting, if ever.
+ * @param cachedRecords how many files the fit cache folder holds
+ * @example startWorkersEarly(1000, 0, 40) // => true
+ * @example startWorkersEarly(1000, 1000, 40) // => false
+ */
+export function startWorkersEarly(folders: number, cachedRecords: number, minimumJobs: number): boolean {
+  return folders >= minimumJobs && cachedRecords < minimumJobs;
+}
+
+function filesIn(directory: string): number {
+  try {
+    return readdirSync(directory).length;
+  } catch {
+    return 0;
+  }
 }
 
 /** One folder's fit from the cache, or undefined when the cache does not hold its inputs. */
@@ -135,7 +158,8 @@ interface Item {
 /**
  * Read, validate and fit every folder. Fitting starts while the other folders are still being read: each folder is
  * looked up in the cache as soon as it is read, and once POOL_MINIMUM_JOBS (or `workers.minimumJobs`) folders need
- * fitting, worker threads start and fit them while reading goes on; fewer are fitted here after reading. Which
+ * fitting, worker threads start and fit them while reading goes on (on a cold cache with that many folders, before
+ * the first folder is read: startWorkersEarly); fewer are fitted here after reading. Which
  * thread fits a dataset never changes its fit (the same code runs), so the result does not depend on timing.
  *
  * Timing: `readingMs` and `fittingMs` add up to the pass's wall time. The time this thread spends on the fitting
@@ -184,6 +208,13 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
       progress();
     });
   };
+  const startPool = (jobs: number) => {
+    refitStarted = performance.now();
+    pool = createFitPool(workers!.root, path.join(cache!.directory, '..', 'correlary-worker'), poolSize(jobs, minimumJobs)).catch(() => undefined);
+  };
+  const onFolders = (folders: number) => {
+    if (cache !== undefined && workers !== undefined && startWorkersEarly(folders, filesIn(cache.directory), minimumJobs)) startPool(folders);
+  };
   const onDataset = (read: DatasetResult, folders: number, folderRead: FolderRead) => {
     const begun = performance.now();
     total = folders;
@@ -210,10 +241,8 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
       else {
         waiting.push(item);
         if (cache !== undefined && workers !== undefined && waiting.length >= minimumJobs) {
-          refitStarted = performance.now();
           // Sized for the folders that may still need fitting: those waiting and those not read yet.
-          const size = poolSize(waiting.length + folders - items.size, minimumJobs);
-          pool = createFitPool(workers.root, path.join(cache.directory, '..', 'correlary-worker'), size).catch(() => undefined);
+          startPool(waiting.length + folders - items.size);
           for (const queued of waiting.splice(0)) fitInPool(queued);
         }
       }
@@ -223,7 +252,7 @@ export async function fitHandbook(directory: string, options: FitHandbookOptions
   let handbook: Awaited<ReturnType<typeof readHandbook>>;
   let readEnded: number;
   try {
-    handbook = await readHandbook(directory, { onDataset, ...(known === undefined ? {} : { known }) });
+    handbook = await readHandbook(directory, { onFolders, onDataset, ...(known === undefined ? {} : { known }) });
     readEnded = performance.now();
     // Fewer folders to fit than it takes to start workers: here.
     if (waiting.length > 0) refitStarted ??= performance.now();

@@ -27,6 +27,8 @@ export interface ReadHandbookOptions {
    * folders (duplicate slugs) are only known from the result.
    */
   readonly onDataset?: (dataset: DatasetResult, folders: number, read: FolderRead) => void;
+  /** Called once with how many folders there are, before any is read (fitHandbook may start workers then). */
+  readonly onFolders?: (folders: number) => void;
   /**
    * What an earlier read recorded for a folder path (src/load/folderRecord.ts), used when neither of its files
    * changed (readFolder). Called as each folder's reading starts.
@@ -47,6 +49,7 @@ export async function readHandbook(directory: string, options: ReadHandbookOptio
     .filter((entry) => entry.isDirectory() && !entry.name.startsWith('.') && !entry.name.startsWith('_'))
     .map((entry) => entry.name)
     .sort();
+  options.onFolders?.(folders.length);
   const datasets = await Promise.all(
     folders.map(async (name) => {
       const folder = path.join(directory, name);

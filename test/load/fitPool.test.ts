@@ -9,6 +9,8 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitHandbook } from '../../src/load/index.ts';
 import { poolSize } from '../../src/load/fitPool.ts';
+import { startWorkersEarly } from '../../src/load/fitHandbook.ts';
+import { mkdir } from 'node:fs/promises';
 
 let root = '';
 beforeAll(async () => {
@@ -28,6 +30,14 @@ describe('fitHandbook in worker threads', () => {
     expect(poolSize(3, 1)).toBeGreaterThanOrEqual(1);
     expect(poolSize(1000)).toBeGreaterThanOrEqual(1);
     expect(poolSize(1000)).toBeLessThanOrEqual(4);
+  });
+
+  it('startWorkersEarly: before reading only for a cold cache and enough folders for workers', () => {
+    expect(startWorkersEarly(1000, 0, 40)).toBe(true);
+    expect(startWorkersEarly(1000, 39, 40)).toBe(true);
+    // A rebuild: most folders will come from the cache; workers start only if 40 turn out to need fitting.
+    expect(startWorkersEarly(1000, 40, 40)).toBe(false);
+    expect(startWorkersEarly(39, 0, 40)).toBe(false);
   });
 
   it('the demo handbook fitted by workers equals the same handbook fitted in one thread', async () => {
@@ -60,8 +70,12 @@ describe('fitHandbook in worker threads', () => {
     expect(fresh.diagnostics.filter((item) => item.severity === 'error').map((item) => item.message)).toEqual(
       expect.arrayContaining([expect.stringContaining("is not a valid slug"), expect.stringContaining("slug 'corvane-12-density' is also used by")]),
     );
-    for (const minimumJobs of [1, 5]) {
-      const fitCache = { directory: path.join(root, `cache-clash-${minimumJobs}`, 'correlary-fits'), version: 'pool-test-1' };
+    // An empty cache starts the workers before reading (startWorkersEarly); one holding stale records (of other
+    // inputs) starts them once `minimumJobs` folders are found to need fitting, while the rest are being read.
+    for (const [minimumJobs, stale] of [[1, 0], [5, 0], [5, 6]] as const) {
+      const fitCache = { directory: path.join(root, `cache-clash-${minimumJobs}-${stale}`, 'correlary-fits'), version: 'pool-test-1' };
+      await mkdir(fitCache.directory, { recursive: true });
+      for (let i = 0; i < stale; i++) await writeFile(path.join(fitCache.directory, `${String(i).padStart(64, 'f')}.json`), '{}\n');
       const pooled = await fitHandbook(content, { fitCache, workers: { root: process.cwd(), minimumJobs }, prune: true });
       expect(fitsOf(pooled)).toEqual(fitsOf(fresh));
       expect(pooled.diagnostics).toEqual(fresh.diagnostics);
