@@ -37,7 +37,7 @@ export async function writeCorrelationFolder(target: string, entry: CorrelationE
 /**
  * The files of a correlation's folder (without its digest): the downloads (correlationFiles), the page parts, and
  * what other routes take from the folder (folderExtras).
- * @example correlationFolderFiles(entry, identity).map((file) => file.file) // => ['coefficients.json', …, '.page.json', '.page-html.json', '.handbook-entry.json']
+ * @example correlationFolderFiles(entry, identity).map((file) => file.file) // => ['coefficients.json', …, '.page.json', '.page-html.txt', '.handbook-entry.json']
  */
 export function correlationFolderFiles(entry: CorrelationEntry, handbook: HandbookIdentity): { file: string; text: string }[] {
   const files = correlationFiles(entry, handbook);

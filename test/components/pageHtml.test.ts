@@ -18,7 +18,7 @@ import { dataTableView } from '../../src/components/lib/dataRows.ts';
 import { fitOf, selectionOf } from '../../src/components/lib/entryView.ts';
 import { formatExact, formatNumber } from '../../src/components/lib/formatNumber.ts';
 import { htmlText } from '../../src/components/lib/htmlText.ts';
-import { pageHtml } from '../../src/components/lib/pageHtml.ts';
+import { pageHtml, pageHtmlText, readPageHtml } from '../../src/components/lib/pageHtml.ts';
 import { statisticsRowsHtml } from '../../src/components/lib/statisticsRowsHtml.ts';
 import { dataRowsHtml } from '../../src/components/lib/dataRowsHtml.ts';
 import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
@@ -125,6 +125,27 @@ describe('pageHtml', () => {
       expect(new Set(statistics.tags)).toEqual(new Set(['table', 'tbody', 'tr', 'td']));
       expect(statistics.rows.some((row) => row.cells[0] === `largest |residual| (${payload})`)).toBe(true);
     }
+  });
+
+  it('readPageHtml(pageHtmlText(html)) gives the pieces back, on the demo and on random text; anything else is refused', () => {
+    for (const entry of entries) {
+      const html = pageHtml(entry);
+      expect(readPageHtml(pageHtmlText(html)), entry.slug).toEqual(html);
+    }
+    const piece = fc.string({ unit: fc.constantFrom('a', '\n', '"', '[', ']', '😀', '≤', '<') });
+    const html = fc.record({ dataRows: piece, coefficientRows: piece, mappedRows: piece, checkValueRows: piece, statisticsRows: piece, orderRows: fc.option(piece, { nil: null }) });
+    fc.assert(
+      fc.property(html, (value) => {
+        expect(readPageHtml(pageHtmlText(value))).toEqual(value);
+        // Through the file's bytes, as the page reads it.
+        expect(readPageHtml(Buffer.from(pageHtmlText(value)).toString('utf8'))).toEqual(value);
+      }),
+      { numRuns: 300 },
+    );
+    const text = pageHtmlText(pageHtml(entries[0]!));
+    expect(readPageHtml(text.slice(0, -1))).toBeUndefined();
+    expect(readPageHtml(`${text}x`)).toBeUndefined();
+    expect(readPageHtml('not a header')).toBeUndefined();
   });
 
   it('checkValueRowsHtml writes a missing printed check value as a dash', () => {

@@ -1,7 +1,10 @@
 /**
  * overlapComparison: the largest difference of two curves over the overlap of their ranges, relative to the
- * root-sum-square of their prediction half-widths. Expected values computed by hand for straight lines.
+ * root-sum-square of their prediction half-widths. Expected values computed by hand for straight lines; on random
+ * curves (sorted or not, with missing values), the result is exactly that of the plain definition below, which
+ * searches every column's segment from the start (an independent computation: the code before the search was shared).
  */
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { overlapComparison, type CurveRow } from '../../src/render/index.ts';
 
@@ -34,5 +37,53 @@ describe('overlapComparison', () => {
     expect(ab.maxRatio).toBeCloseTo(Math.SQRT2, 12);
     expect(ba.maxRatio).toBeCloseTo(Math.SQRT2, 12);
     expect(ab.maxDifference).toBeCloseTo(2, 12);
+  });
+
+  it('overlapComparison(a, b) equals the plain definition exactly on random curves, sorted or not, with missing values', () => {
+    /** Linear interpolation of one column at x on the first segment that holds x; null outside or undefined. */
+    const interpolate = (curve: readonly CurveRow[], x: number, column: number): number | null => {
+      for (let i = 1; i < curve.length; i++) {
+        const a = curve[i - 1]!;
+        const b = curve[i]!;
+        if (x < a[0] || x > b[0]) continue;
+        const va = a[column];
+        const vb = b[column];
+        if (va == null || vb == null) return null;
+        const t = b[0] === a[0] ? 0 : (x - a[0]) / (b[0] - a[0]);
+        return va + t * (vb - va);
+      }
+      return null;
+    };
+    const plain = (a: readonly CurveRow[], b: readonly CurveRow[], count = 101) => {
+      if (a.length < 2 || b.length < 2) return null;
+      const min = Math.max(a[0]![0], b[0]![0]);
+      const max = Math.min(a.at(-1)![0], b.at(-1)![0]);
+      if (!(min < max)) return null;
+      let best = { maxDifference: -1, atMaxDifference: min, maxRatio: -1, atMaxRatio: min };
+      for (let i = 0; i < count; i++) {
+        const x = i === count - 1 ? max : min + ((max - min) * i) / (count - 1);
+        const values = [interpolate(a, x, 1), interpolate(b, x, 1), interpolate(a, x, 4), interpolate(a, x, 5), interpolate(b, x, 4), interpolate(b, x, 5)];
+        if (values.includes(null)) continue;
+        const [ya, yb, la, ha, lb, hb] = values as number[];
+        const difference = Math.abs(ya! - yb!);
+        const u = Math.hypot((ha! - la!) / 2, (hb! - lb!) / 2);
+        const ratio = u > 0 ? difference / u : difference === 0 ? 0 : Infinity;
+        if (difference > best.maxDifference) best = { ...best, maxDifference: difference, atMaxDifference: x };
+        if (ratio > best.maxRatio) best = { ...best, maxRatio: ratio, atMaxRatio: x };
+      }
+      return best.maxDifference < 0 ? null : { overlap: { min, max }, ...best };
+    };
+    const value = fc.option(fc.double({ min: -100, max: 100, noNaN: true }), { nil: null, freq: 8 });
+    const row = fc.tuple(fc.double({ min: -10, max: 10, noNaN: true }), value, value, value, value, value);
+    const curve = fc.oneof(
+      fc.array(row, { minLength: 0, maxLength: 12 }),
+      fc.array(row, { minLength: 2, maxLength: 12 }).map((rows) => [...rows].sort((p, q) => p[0] - q[0])),
+    );
+    fc.assert(
+      fc.property(curve, curve, fc.integer({ min: 2, max: 40 }), (a, b, count) => {
+        expect(overlapComparison(a, b, count)).toEqual(plain(a, b, count));
+      }),
+      { numRuns: 2000 },
+    );
   });
 });

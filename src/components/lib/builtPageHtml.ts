@@ -5,7 +5,7 @@
  */
 import { isStoredFitReference } from '../../load/storedFit.ts';
 import { writtenBytes } from '../../loaders/writtenBytes.ts';
-import { PAGE_HTML_FILE, type PageHtml } from './pageHtml.ts';
+import { PAGE_HTML_FILE, readPageHtml, type PageHtml } from './pageHtml.ts';
 import type { CorrelationEntry } from './entryView.ts';
 
 /** The last file read: a page's components ask for the same one in turn. */
@@ -17,12 +17,7 @@ export function builtPageHtml(entry: CorrelationEntry): PageHtml | undefined {
   const key = `${entry.fit.fitCache.directory}\0${entry.slug}`;
   if (last?.key === key) return last.html;
   const bytes = writtenBytes(entry.fit, entry.slug, PAGE_HTML_FILE);
-  let html: PageHtml | undefined;
-  try {
-    html = bytes === undefined ? undefined : (JSON.parse(bytes.toString('utf8')) as PageHtml);
-  } catch {
-    html = undefined;
-  }
+  const html = bytes === undefined ? undefined : readPageHtml(bytes.toString('utf8'));
   last = { key, html };
   return html;
 }

@@ -4,9 +4,11 @@
  * prediction band sampled at build time and the pairwise comparison of sources of the same material where their
  * ranges overlap.
  */
-import { curveRows, overlapComparison, type CurveRow, type OverlapComparison } from '../../render/index.ts';
+import { overlapComparison, type CurveRow, type OverlapComparison } from '../../render/index.ts';
+import { builtPropertyCurve } from './builtPropertyCurve.ts';
 import { fitSummaryOf, type CorrelationEntry } from './entryView.ts';
 import { propertyKey } from './propertyKey.ts';
+import { propertyCurve } from './propertyCurve.ts';
 
 export interface PropertyGroup {
   readonly key: string;
@@ -38,9 +40,6 @@ export interface UnitGroup {
   readonly disjoint: readonly (readonly [PlotSeries, PlotSeries])[];
 }
 
-/** Curve samples per correlation on a property page: enough for a smooth curve, small enough for many sources. */
-const SAMPLES = 60;
-
 function mostCommon(values: readonly string[]): string {
   const counts = new Map<string, number>();
   for (const value of values) counts.set(value, (counts.get(value) ?? 0) + 1);
@@ -67,7 +66,8 @@ export function propertyGroups(entries: readonly CorrelationEntry[]): PropertyGr
 }
 
 /**
- * The plots of one property: one per pair of units, numbering the series 1, 2, … across the page.
+ * The plots of one property: one per pair of units, numbering the series 1, 2, … across the page. Each curve comes
+ * from the files written in a build (builtPropertyCurve.ts: the caller waits for them), else is computed here.
  * @example unitGroups(group)[0].series.length // => 2
  */
 export function unitGroups(group: PropertyGroup): UnitGroup[] {
@@ -79,7 +79,7 @@ export function unitGroups(group: PropertyGroup): UnitGroup[] {
   }
   let label = 0;
   return [...byUnits.values()].map((members) => {
-    const series = members.map((entry) => ({ label: String(++label), entry, curve: curveRows(fitSummaryOf(entry)!, entry.range, SAMPLES, 5) }));
+    const series = members.map((entry) => ({ label: String(++label), entry, curve: builtPropertyCurve(entry) ?? propertyCurve(fitSummaryOf(entry)!, entry.range) }));
     const pairs: PairComparison[] = [];
     const disjoint: [PlotSeries, PlotSeries][] = [];
     for (let i = 0; i < series.length; i++) {
