@@ -26,7 +26,8 @@
  * fit equals a fresh one.
  */
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
+import { Buffer } from 'node:buffer';
+import { closeSync, existsSync, mkdirSync, openSync, readFileSync, readSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { threadId } from 'node:worker_threads';
 import type { OrderPreviews } from '../render/orderPreviews.ts';
@@ -158,6 +159,38 @@ function writeAtomically(target: string, text: string): void {
   renameSync(temporary, target);
 }
 
+/** Where first lines are read into (grown when a line is longer): one buffer, not one per file. */
+let lineBuffer = Buffer.allocUnsafe(64 * 1024);
+
+/**
+ * The first line of `file` (without its line break), or undefined when the file has none. Reads only as far as the
+ * line goes, into a buffer kept between calls: a record's summary is about half of its file, and reading the whole
+ * file allocated a buffer for it every time (N = 1000 cold build, main thread: 94 ms of 590 in readCachedSummary).
+ * @throws Error when the file cannot be opened or read
+ */
+function firstLine(file: string): string | undefined {
+  const descriptor = openSync(file, 'r');
+  try {
+    let filled = 0;
+    let searched = 0;
+    for (;;) {
+      if (filled === lineBuffer.length) {
+        const larger = Buffer.allocUnsafe(lineBuffer.length * 2);
+        lineBuffer.copy(larger, 0, 0, filled);
+        lineBuffer = larger;
+      }
+      const read = readSync(descriptor, lineBuffer, filled, lineBuffer.length - filled, filled);
+      if (read === 0) return undefined;
+      filled += read;
+      const end = lineBuffer.subarray(searched, filled).indexOf(10);
+      if (end >= 0) return lineBuffer.toString('utf8', 0, searched + end);
+      searched = filled;
+    }
+  } finally {
+    closeSync(descriptor);
+  }
+}
+
 /**
  * The fit, order selection and messages under `key`, from the first line of its record; `fit.points` is read from
  * the whole record only when first asked for. Undefined when the cache does not hold the key (or it cannot be read).
@@ -166,10 +199,9 @@ function writeAtomically(target: string, text: string): void {
 export function readCachedSummary(directory: string, key: string): DatasetFit | undefined {
   let summary: DatasetFit;
   try {
-    const bytes = readFileSync(fileOf(directory, key));
-    const end = bytes.indexOf(10); // the line break after the summary
-    if (end < 0) return undefined;
-    summary = fromCacheJson(bytes.toString('utf8', 0, end)) as DatasetFit;
+    const line = firstLine(fileOf(directory, key));
+    if (line === undefined) return undefined;
+    summary = fromCacheJson(line) as DatasetFit;
   } catch {
     return undefined; // a damaged file is refitted and rewritten
   }

@@ -9,7 +9,7 @@ import path from 'node:path';
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitHandbook } from '../../src/load/index.ts';
-import { fitCacheKey, fromCacheJson, readCachedFit, toCacheJson, writeCachedFit } from '../../src/load/fitCache.ts';
+import { fitCacheKey, fromCacheJson, readCachedFit, readCachedSummary, toCacheJson, writeCachedFit } from '../../src/load/fitCache.ts';
 import { cacheRecord } from '../../src/load/cacheRecord.ts';
 import { fitDataset } from '../../src/load/fitDataset.ts';
 import { fitPolynomial } from '../../src/core/index.ts';
@@ -174,6 +174,26 @@ describe('fit cache', () => {
       }
     }
     expect(special).toBeGreaterThan(8);
+  });
+
+  it('readCachedSummary reads a summary line of any length (longer than its buffer), and nothing from a file without one', async () => {
+    const content = path.join(root, 'content');
+    const correlation = (await fitHandbook(content)).datasets[0]!.dataset.correlation!;
+    const record = cacheRecord(correlation, fitDataset(correlation));
+    const directory = path.join(root, 'cache-long-summary');
+    // A message of 300 000 characters, some of them outside ASCII (UTF-8 of two and four bytes).
+    const message = 'λ≤𝑥 '.repeat(60_000);
+    const long = { ...record, diagnostics: [...record.diagnostics, { severity: 'warning' as const, file: 'x.csv', line: 1, column: 1, message }] };
+    for (const [key, written] of [['c'.repeat(64), long], ['d'.repeat(64), record], ['e'.repeat(64), long]] as const) {
+      writeCachedFit(directory, key, written);
+      const summary = readCachedSummary(directory, key)!;
+      expect(summary.diagnostics).toEqual(written.diagnostics);
+      expect(summary.selection).toEqual(written.selection);
+      expect(summary.fit!.printedCoefficients).toEqual(written.fit!.printedCoefficients);
+    }
+    await writeFile(path.join(directory, `${'f'.repeat(64)}.json`), '{"no line break"');
+    expect(readCachedSummary(directory, 'f'.repeat(64))).toBeUndefined();
+    expect(readCachedSummary(directory, '0'.repeat(64))).toBeUndefined();
   });
 
   it('fitCacheKey changes with a data value, a fit option and the code version, and only then', async () => {
