@@ -17,7 +17,7 @@
  * the pages and exports show of the fit (its order table included). A hit parses only that line, and so does a
  * correlation page, whose data table and previews come with its page parts (src/components/lib/pageParts.ts); the
  * per-point statistics are read from the whole record the first time something asks for them (readCachedSummary).
- * The data rows and the previews follow on the second line, then the fit's per-point statistics, packed
+ * The data rows follow on the second line, the previews on the third, then the fit's per-point statistics, packed
  * (packedJson.ts: each array of numbers as its doubles in base64), which is several times cheaper to write and read
  * back than JSON's 17-digit text and keeps every double bit for bit. One file, written once: before format 4 the
  * summary was a second file, and the record repeated it.
@@ -38,6 +38,7 @@ import type { LoadedCorrelation } from './types.ts';
 import { pruneKeyedFiles } from './pruneKeyedFiles.ts';
 import { fromCacheJson, toCacheJson } from './cacheJson.ts';
 import { fromPackedJson, toPackedJson } from './packedJson.ts';
+import { rememberPreviewsJson } from './previewsJson.ts';
 
 export { fromCacheJson, toCacheJson };
 
@@ -94,44 +95,50 @@ function summaryOf(record: CachedFit): DatasetFit {
   };
 }
 
-/** What a record holds besides its summary and fit.points (its second line). */
+/** What a record holds besides its summary, its previews and fit.points (its second line). */
 interface RecordRest {
   /** The place of fit.points among the keys of the fit that JSON writes (so that the fit comes back in order). */
   readonly fitPointsAt?: number;
   readonly points: readonly DataPoint[];
-  readonly previews: OrderPreviews | null;
 }
 
 function restOf(record: CachedFit): RecordRest {
   const fit = record.fit as unknown as Record<string, unknown> | undefined;
-  if (fit?.['points'] === undefined) return { points: record.points, previews: record.previews };
+  if (fit?.['points'] === undefined) return { points: record.points };
   let fitPointsAt = 0;
   for (const key of Object.keys(fit)) {
     if (key === 'points') break;
     if (fit[key] !== undefined) fitPointsAt++;
   }
-  return { fitPointsAt, points: record.points, previews: record.previews };
+  return { fitPointsAt, points: record.points };
 }
 
 /**
- * The record's text, in three parts: the summary (cacheJson.ts) on the first line; the data rows and the previews
- * (cacheJson.ts) on the second; then fit.points, packed (packedJson.ts: its arrays of full-precision doubles are the
- * costly part of a record's JSON). The rows and the previews stay JSON: their numbers are short (as written in the
- * data file; rounded for drawing), which V8 writes and reads about as fast as any packed form, and a walk over the
- * rows' objects would cost more than it saves.
+ * The record's text, in four parts: the summary (cacheJson.ts) on the first line; the data rows (cacheJson.ts) on
+ * the second; the previews (cacheJson.ts) on the third, whose text a page's previews JSON takes as it is
+ * (previewsJson.ts); then fit.points, packed (packedJson.ts: its arrays of full-precision doubles are the costly part
+ * of a record's JSON). The rows and the previews stay JSON: their numbers are short (as written in the data file;
+ * rounded for drawing), which V8 writes and reads about as fast as any packed form, and a walk over the rows'
+ * objects would cost more than it saves.
  */
 function recordText(record: CachedFit): string {
-  return `${toCacheJson(summaryOf(record))}\n${toCacheJson(restOf(record))}\n${toPackedJson(record.fit?.points ?? null)}`;
+  const previews = record.previews === undefined ? 'null' : toCacheJson(record.previews);
+  return `${toCacheJson(summaryOf(record))}\n${toCacheJson(restOf(record))}\n${previews}\n${toPackedJson(record.fit?.points ?? null)}`;
 }
 
 /** The record of a recordText. */
 function recordOf(text: string): CachedFit {
   const first = text.indexOf('\n');
   const second = first < 0 ? -1 : text.indexOf('\n', first + 1);
-  if (second < 0) throw new Error('recordOf requires a summary line and a line of data rows');
+  const third = second < 0 ? -1 : text.indexOf('\n', second + 1);
+  if (third < 0) throw new Error('recordOf requires a summary line, a line of data rows and a line of previews');
   const summary = fromCacheJson(text.slice(0, first)) as DatasetFit;
   const rest = fromCacheJson(text.slice(first + 1, second)) as RecordRest;
-  const fitPoints = fromPackedJson(text.slice(second + 1)) as PolynomialFit['points'] | null;
+  const previewsText = text.slice(second + 1, third);
+  const previews = fromCacheJson(previewsText) as OrderPreviews | null;
+  // Plain JSON (no tagged number): JSON.stringify's text of what it parses to.
+  if (previews !== null && !previewsText.includes('"$number"')) rememberPreviewsJson(previews, previewsText);
+  const fitPoints = fromPackedJson(text.slice(third + 1)) as PolynomialFit['points'] | null;
   let fit = summary.fit;
   if (fit !== undefined && rest.fitPointsAt !== undefined) {
     const keys = Object.keys(fit);
@@ -149,7 +156,7 @@ function recordOf(text: string): CachedFit {
   if (summary.selection !== undefined) record['selection'] = summary.selection;
   if (summary.diagnostics !== undefined) record['diagnostics'] = summary.diagnostics;
   if (rest.points !== undefined) record['points'] = rest.points;
-  if (rest.previews !== undefined) record['previews'] = rest.previews;
+  record['previews'] = previews;
   return record as unknown as CachedFit;
 }
 

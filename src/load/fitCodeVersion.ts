@@ -2,7 +2,7 @@
  * The version of the fitting code, for the fit cache's keys: SHA-256 of the package version and of every source
  * file of the numerical core, of the dataset fit and of the previews stored with it (src/core/**,
  * src/load/fitDataset.ts, src/load/cacheRecord.ts, src/render/**, and the fitting worker's
- * fitCache.ts, its JSON (cacheJson.ts, packedJson.ts) and fitWorker.ts) under the package root,
+ * fitCache.ts, its JSON (cacheJson.ts, packedJson.ts, previewsJson.ts) and fitWorker.ts) under the package root,
  * so that a changed core never serves a stale fit, even without a new version number. Where the sources are not
  * present (a compiled install), the package version alone.
  */
@@ -48,6 +48,7 @@ export function fitCodeVersion(packageRoot: string): string {
     path.join(packageRoot, 'src', 'load', 'fitCache.ts'),
     path.join(packageRoot, 'src', 'load', 'cacheJson.ts'),
     path.join(packageRoot, 'src', 'load', 'packedJson.ts'),
+    path.join(packageRoot, 'src', 'load', 'previewsJson.ts'),
     path.join(packageRoot, 'src', 'load', 'fitWorker.ts'),
   ];
   for (const file of files) {

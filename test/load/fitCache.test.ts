@@ -11,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitHandbook } from '../../src/load/index.ts';
 import { fitCacheKey, fromCacheJson, readCachedFit, readCachedSummary, toCacheJson, writeCachedFit } from '../../src/load/fitCache.ts';
 import { cacheRecord } from '../../src/load/cacheRecord.ts';
+import { previewsJson, rememberPreviewsJson } from '../../src/load/previewsJson.ts';
 import { fitDataset } from '../../src/load/fitDataset.ts';
 import { fitPolynomial } from '../../src/core/index.ts';
 import { orderPreviews } from '../../src/render/index.ts';
@@ -171,9 +172,30 @@ describe('fit cache', () => {
         expect(back).toEqual(written);
         expect(toCacheJson(back)).toBe(toCacheJson(written));
         special += back.fit!.points.studentized.filter((value) => !Number.isFinite(value) || Object.is(value, -0)).length;
+        // The previews' JSON a page embeds: what JSON.stringify writes of them, taken from the record's line.
+        expect(previewsJson(back.previews!)).toBe(JSON.stringify(written.previews));
       }
     }
     expect(special).toBeGreaterThan(8);
+  });
+
+  it('previewsJson gives JSON.stringify\'s text of the previews read from a record, also when they hold −0 (not remembered then)', async () => {
+    const content = path.join(root, 'content');
+    const correlation = (await fitHandbook(content)).datasets[0]!.dataset.correlation!;
+    const record = cacheRecord(correlation, fitDataset(correlation));
+    // −0 in the grid: the record's line tags it, and JSON.stringify writes 0 (the page's JSON is JSON.stringify's).
+    const withZero = { ...record, previews: { ...record.previews!, grid: [-0, ...record.previews!.grid.slice(1)] } };
+    const directory = path.join(root, 'cache-previews-json');
+    writeCachedFit(directory, 'a'.repeat(64), withZero);
+    const back = readCachedFit(directory, 'a'.repeat(64))!;
+    expect(Object.is(back.previews!.grid[0], -0)).toBe(true);
+    expect(previewsJson(back.previews!)).toBe(JSON.stringify(withZero.previews));
+    expect(previewsJson(back.previews!)).toContain('"grid":[0,');
+    // A remembered text is what previewsJson gives for that object (and only for it).
+    const object = { published: 2 };
+    rememberPreviewsJson(object, '{"published":2}');
+    expect(previewsJson(object)).toBe('{"published":2}');
+    expect(previewsJson({ published: 3 })).toBe('{"published":3}');
   });
 
   it('readCachedSummary reads a summary line of any length (longer than its buffer), and nothing from a file without one', async () => {

@@ -5,6 +5,7 @@
  */
 import { renderOrderStatsSvg, type OrderStatPanel } from '../../render/index.ts';
 import type { OrderPreviews, OrderSelection, PolynomialFit } from './entryView.ts';
+import { previewsJson } from '../../load/previewsJson.ts';
 
 /** @example orderStatsParts(fit, selection, previews)?.svg.startsWith('<svg') // => true */
 export function orderStatsParts(fit: PolynomialFit, selection: OrderSelection | null, previews: OrderPreviews | null): { readonly svg: string; readonly json: string } | null {
@@ -19,6 +20,7 @@ export function orderStatsParts(fit: PolynomialFit, selection: OrderSelection | 
   ];
   return {
     svg: renderOrderStatsSvg(panels, fit.order, `Selection statistics against order; order ${fit.order} is published`),
-    json: JSON.stringify(previews).replace(/</g, '\\u003c'),
+    // JSON.stringify(previews), taken from the fit record's line when it was read from one (previewsJson.ts).
+    json: previewsJson(previews).replace(/</g, '\\u003c'),
   };
 }
