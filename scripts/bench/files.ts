@@ -85,7 +85,8 @@ async function load(name: string, root: string): Promise<Code> {
     forgetStoredFits: stored.forgetStoredFits,
     pagePartsText: folder.pagePartsText,
     toCacheJson: cache.toCacheJson,
-    readPageParts: packed?.fromPackedJson ?? cache.fromCacheJson,
+    // Page parts are packed JSON where the checkout writes them with pagePartsText, the cache's JSON before.
+    readPageParts: folder.pagePartsText !== undefined && packed !== undefined ? packed.fromPackedJson : cache.fromCacheJson,
     jobs: [],
   };
 }
