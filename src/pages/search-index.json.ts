@@ -8,7 +8,9 @@ import MiniSearch from 'minisearch';
 import { SEARCH_OPTIONS, type SearchDocument } from '../client/searchOptions.ts';
 
 export const GET: APIRoute = async () => {
-  const entries = (await correlationEntries()).map((entry) => entry.data);
+  // In slug order, whatever order the collection comes in (two builds of the same handbook once gave it in two
+  // orders, and the index's document numbers with it; the usual order is this one, so the bytes are the usual ones).
+  const entries = (await correlationEntries()).map((entry) => entry.data).sort((a, b) => (a.slug < b.slug ? -1 : a.slug > b.slug ? 1 : 0));
   const index = new MiniSearch<SearchDocument>(SEARCH_OPTIONS);
   index.addAll(
     entries.map((entry) => ({
