@@ -36,6 +36,9 @@ export async function bundleClientScripts(root: string, folder: string): Promise
     target: 'esnext',
     minify: true,
     charset: 'utf8',
+    // Paths as seen from the project, not through symbolic links: esbuild's hashes depend on the inputs' paths, and
+    // a node_modules that is a link (a workspace, a shared install) would otherwise give other file names.
+    preserveSymlinks: true,
     metafile: true,
     logLevel: 'silent',
   });

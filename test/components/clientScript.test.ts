@@ -2,7 +2,7 @@
  * The pages' browser scripts: bundled by esbuild in a build (src/loaders/clientScriptsIntegration.ts), served from
  * source under `astro dev` (src/components/lib/clientScript.ts). The site test checks the built pages load them.
  */
-import { mkdtemp, readFile, rm } from 'node:fs/promises';
+import { mkdir, mkdtemp, readFile, rm, symlink } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -63,5 +63,17 @@ describe('bundleClientScripts', () => {
     }
     // The entries share code (the chart mounting, number formatting): split into files they import.
     expect(imports).toBeGreaterThan(0);
+  });
+
+  it('gives the same files from a project whose src and node_modules are symbolic links (names hash the inputs\' paths)', async () => {
+    const linked = await mkdtemp(path.join(tmpdir(), 'correlary-client-linked-'));
+    const plain = await mkdtemp(path.join(tmpdir(), 'correlary-client-'));
+    folders.push(linked, plain);
+    const project = path.join(linked, 'project');
+    await mkdir(project);
+    await symlink(path.join(root, 'src'), path.join(project, 'src'));
+    await symlink(path.join(root, 'node_modules'), path.join(project, 'node_modules'));
+    const fromLinks = await bundleClientScripts(project, path.join(linked, 'out'));
+    expect(fromLinks).toEqual(await bundleClientScripts(root, plain));
   });
 });
