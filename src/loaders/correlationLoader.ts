@@ -18,7 +18,7 @@ import { correlationFilesFolder } from './correlationFilesFolder.ts';
 import { deferFiles } from './pendingFiles.ts';
 import { takeCheckedHandbook } from './checkedHandbook.ts';
 import { storedEntry } from './storedEntry.ts';
-import { rememberStoredCorrelations } from './storedCorrelations.ts';
+import { rememberStoredCorrelations, resaveInOrder } from './storedCorrelations.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 
 export interface CorrelationLoaderOptions {
@@ -82,12 +82,7 @@ async function loadAll(context: LoaderContext, absoluteDirectory: string): Promi
   if (context.watcher === undefined) {
     rememberStoredCorrelations({
       digests: inputs.map((input) => input.digest),
-      resave: () => {
-        const first = inputs[0];
-        if (first === undefined) return;
-        context.store.delete(first.id);
-        context.store.set(first);
-      },
+      resave: () => resaveInOrder(context.store, inputs),
     });
   }
   // A build writes each correlation's downloads once here (copied into the output at the end); `astro dev`, which

@@ -17,8 +17,26 @@ const KEY = Symbol.for('correlary.storedCorrelations');
 export interface StoredCorrelations {
   /** The digest of every entry the loader stored (Astro keeps each in the store file as a JSON string). */
   readonly digests: readonly string[];
-  /** Make Astro save its store again (from memory, where it is right): takes one entry out and puts it back. */
+  /** Make Astro save its store again (from memory, where it is right): resaveInOrder. */
   readonly resave: () => void;
+}
+
+/** The part of Astro's scoped store a resave uses (its `set` does nothing for an entry it holds with the same digest). */
+export interface EntryStore<Entry> {
+  delete(id: string): void;
+  set(entry: Entry): unknown;
+}
+
+/**
+ * Make Astro save the store again, keeping the entries' order: every entry is taken out, then all are put back in
+ * the order they were stored. Astro saves only on a change (putting back an entry it holds unchanged is none), and
+ * its collection keeps insertion order, which getCollection and so the lists follow: taking out and putting back
+ * only one entry would move it to the end, and a build after a lost save would differ from one without.
+ * @example resaveInOrder(context.store, inputs)
+ */
+export function resaveInOrder<Entry extends { readonly id: string }>(store: EntryStore<Entry>, entries: readonly Entry[]): void {
+  for (const entry of entries) store.delete(entry.id);
+  for (const entry of entries) store.set(entry);
 }
 
 type Holder = { [KEY]?: StoredCorrelations };

@@ -10,7 +10,7 @@ import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
 import { completeStoreFile, dataStoreIntegration, dataStoreModule } from '../../src/loaders/dataStoreIntegration.ts';
-import { missingDigests, rememberStoredCorrelations } from '../../src/loaders/storedCorrelations.ts';
+import { missingDigests, rememberStoredCorrelations, resaveInOrder } from '../../src/loaders/storedCorrelations.ts';
 
 const cacheDir = mkdtempSync(path.join(tmpdir(), 'correlary-data-store-'));
 afterAll(() => rmSync(cacheDir, { recursive: true, force: true }));
@@ -67,6 +67,32 @@ describe('dataStoreIntegration()', () => {
     // A digest that occurs only inside another string, or a text that is not a store, does not count as held.
     expect(missingDigests(JSON.stringify([['Map', 1], 'x 0f1e2d3c4b5a6978 y']), ['0f1e2d3c4b5a6978'])).toBe(1);
     expect(missingDigests('[["Map",1],"0f1e2d3c4b5a6978"', ['0f1e2d3c4b5a6978'])).toBe(1);
+  });
+
+  it('resaveInOrder makes the store change (so Astro saves it) and keeps its entries in the order they were stored', () => {
+    // A store with Astro 5.18's rules (mutable-data-store.js): insertion order; a set of an entry held with the same
+    // digest changes nothing and asks for no save.
+    const entries = new Map<string, { id: string; digest: string }>();
+    let saves = 0;
+    const store = {
+      delete: (id: string) => {
+        if (entries.delete(id)) saves++;
+      },
+      set: (entry: { id: string; digest: string }) => {
+        if (entries.get(entry.id)?.digest === entry.digest) return false;
+        entries.set(entry.id, entry);
+        saves++;
+        return true;
+      },
+    };
+    const stored = ['b-two', 'a-one', 'c-three'].map((id, i) => ({ id, digest: `d${i}` }));
+    for (const entry of stored) store.set(entry);
+    saves = 0;
+    store.set(stored[0]!); // putting back an unchanged entry is no change: Astro would not save
+    expect(saves).toBe(0);
+    resaveInOrder(store, stored);
+    expect(saves).toBeGreaterThan(0);
+    expect([...entries.keys()]).toEqual(['b-two', 'a-one', 'c-three']);
   });
 
   it('a store file that lacks entries the loader stored is saved again by Astro before it is bundled, or stops the build', async () => {
