@@ -13,7 +13,7 @@ import { configModules } from './src/loaders/configModules.mjs';
 
 // Correlary's TypeScript sources come as one bundle that Node imports directly (src/loaders/configModules.mjs says
 // why); src/content.config.ts takes the same modules.
-const { basePathSchema, clientScriptsIntegration, contentDirectory, coreBundleIntegration, correlationFilesIntegration, dataStoreIntegration, formatDiagnostic, readHandbookSettings, siteUrlSchema } =
+const { attributeEscapingIntegration, basePathSchema, clientScriptsIntegration, contentDirectory, coreBundleIntegration, correlationFilesIntegration, dataStoreIntegration, formatDiagnostic, readHandbookSettings, siteUrlSchema } =
   await configModules();
 
 // A BASE_URL in the environment (test runners set one) would replace import.meta.env.BASE_URL in the pages and
@@ -48,5 +48,7 @@ export default defineConfig({
   // content store is bundled as one JSON string rather than a large literal (src/loaders/dataStoreIntegration.ts); the
   // server build takes the numerical core as one ready bundle (src/loaders/coreBundleIntegration.ts); the browser
   // scripts are bundled by esbuild while the build starts, so Astro has no client build (clientScriptsIntegration.ts).
-  integrations: [correlationFilesIntegration(), dataStoreIntegration(), coreBundleIntegration(), clientScriptsIntegration()],
+  // Astro writes http(s) addresses with '&' in attributes unescaped; every value is escaped here
+  // (attributeEscapingIntegration.ts).
+  integrations: [correlationFilesIntegration(), dataStoreIntegration(), coreBundleIntegration(), clientScriptsIntegration(), attributeEscapingIntegration()],
 });

@@ -14,5 +14,6 @@ export { correlationFilesIntegration } from './correlationFilesIntegration.ts';
 export { dataStoreIntegration } from './dataStoreIntegration.ts';
 export { coreBundleIntegration } from './coreBundleIntegration.ts';
 export { clientScriptsIntegration } from './clientScriptsIntegration.ts';
+export { attributeEscapingIntegration } from './attributeEscapingIntegration.ts';
 export { correlationLoader } from './correlationLoader.ts';
 export { handbookSettingsLoader } from './handbookSettingsLoader.ts';

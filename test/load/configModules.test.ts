@@ -32,7 +32,7 @@ describe('configModules()', () => {
         { CORRELARY_CONTENT: content },
       );
       // The settings file written above, as astro.config.mjs passes it on (computed by hand).
-      expect(config).toEqual({ site: 'https://handbook.example.org', base: '/thermal/', integrations: ['correlary-correlation-files', 'correlary-data-store-module', 'correlary-core-bundle', 'correlary-client-scripts'] });
+      expect(config).toEqual({ site: 'https://handbook.example.org', base: '/thermal/', integrations: ['correlary-correlation-files', 'correlary-data-store-module', 'correlary-core-bundle', 'correlary-client-scripts', 'correlary-attribute-escaping'] });
     } finally {
       rmSync(content, { recursive: true, force: true });
     }

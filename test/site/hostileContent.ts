@@ -19,6 +19,8 @@ export const TEXT_PAYLOADS: readonly string[] = [
   `=HYPERLINK("http://example.invalid/${MARKER}","open")`,
   `<a href="javascript:alert('${MARKER}')">x</a> @SUM(1+1)`,
   `+cmd|' /C calc'!A0 -${MARKER} <iframe src="javascript:alert('${MARKER}')">`,
+  // An http(s) address with '&': Astro 5.18 writes such attribute values unescaped (attributeEscapingIntegration.ts).
+  `https://x.example/?a&b="><img src=x onerror=alert('${MARKER}')>`,
 ];
 
 /** TeX payloads for the symbols (KaTeX must parse them; with trust off the commands stay inert text). */
