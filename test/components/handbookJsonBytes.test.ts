@@ -6,9 +6,6 @@
  * holding line ends, quotes, separators and non-ASCII text, and empty and nested arrays and objects.
  */
 import fc from 'fast-check';
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { correlationDownloads } from '../../src/components/lib/correlationDownloads.ts';
 import { correlationFiles } from '../../src/components/lib/correlationFiles.ts';
@@ -18,31 +15,22 @@ import { handbookEntryHead, handbookEntryTail } from '../../src/components/lib/h
 import { handbookJsonBytes } from '../../src/components/lib/handbookJsonBytes.ts';
 import { identityOf } from '../../src/components/lib/identityOf.ts';
 import { handbookJson, type HandbookIdentity } from '../../src/export/index.ts';
-import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
-import { forgetStoredFits } from '../../src/load/storedFit.ts';
-import { storedEntry } from '../../src/loaders/storedEntry.ts';
-import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
+import type { CorrelationEntry } from '../../src/schema/index.ts';
+import { fittedDemoEntries } from '../helpers/demoEntries.ts';
 
 const settings = { title: 'Test "handbook" <x>', organisation: 'Org ≤ & co', notice: 'Line one\nline two', url: 'https://handbook.example.org' };
 const base = '/hb/';
 const top = (correlations: Parameters<typeof handbookJson>[0]['correlations']) =>
   handbookJson({ generator: { name: 'correlary', version: '0.0.0' }, handbook: { title: settings.title, organisation: settings.organisation, url: 'https://handbook.example.org/hb/', basePath: base, notice: settings.notice }, correlations });
 
-let root = '';
 let entries: CorrelationEntry[] = [];
+let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
 beforeAll(async () => {
-  root = await mkdtemp(path.join(tmpdir(), 'correlary-handbook-json-'));
-  const fitCache = { directory: path.join(root, 'fits'), version: 'test-1' };
-  const handbook = await fitHandbook('content', { fitCache });
-  const histories = await handbookHistory('content', handbook.datasets);
-  entries = handbook.datasets
-    .map((item) => storedEntry(item, fitCache.directory, histories))
-    .filter((entry): entry is CorrelationEntry => entry !== undefined && entry.fit !== null)
-    .map((entry) => correlationEntrySchema.parse(entry) as CorrelationEntry);
+  demo = await fittedDemoEntries('handbook-json');
+  entries = demo.entries;
 }, 120_000);
 afterAll(async () => {
-  forgetStoredFits();
-  if (root) await rm(root, { recursive: true, force: true });
+  await demo?.remove();
 });
 
 describe('handbookJsonBytes', () => {

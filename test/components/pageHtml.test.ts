@@ -8,9 +8,6 @@
  */
 import fc from 'fast-check';
 import { escapeHTML } from 'astro/runtime/server/escape.js';
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import { parseFragment, type DefaultTreeAdapterMap } from 'parse5';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { checkValueRowsHtml } from '../../src/components/lib/checkValueRowsHtml.ts';
@@ -21,10 +18,8 @@ import { htmlText } from '../../src/components/lib/htmlText.ts';
 import { pageHtml, pageHtmlText, readPageHtml } from '../../src/components/lib/pageHtml.ts';
 import { statisticsRowsHtml } from '../../src/components/lib/statisticsRowsHtml.ts';
 import { dataRowsHtml } from '../../src/components/lib/dataRowsHtml.ts';
-import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
-import { forgetStoredFits } from '../../src/load/storedFit.ts';
-import { storedEntry } from '../../src/loaders/storedEntry.ts';
-import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
+import type { CorrelationEntry } from '../../src/schema/index.ts';
+import { fittedDemoEntries } from '../helpers/demoEntries.ts';
 
 type Node = DefaultTreeAdapterMap['node'];
 type Element = DefaultTreeAdapterMap['element'];
@@ -47,21 +42,14 @@ function rowsOf(html: string): { rows: { className: string | undefined; cells: s
   return { rows, tags };
 }
 
-let root = '';
 let entries: CorrelationEntry[] = [];
+let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
 beforeAll(async () => {
-  root = await mkdtemp(path.join(tmpdir(), 'correlary-page-html-'));
-  const fitCache = { directory: path.join(root, 'fits'), version: 'test-1' };
-  const handbook = await fitHandbook('content', { fitCache });
-  const histories = await handbookHistory('content', handbook.datasets);
-  entries = handbook.datasets
-    .map((item) => storedEntry(item, fitCache.directory, histories))
-    .filter((entry): entry is CorrelationEntry => entry !== undefined && entry.fit !== null)
-    .map((entry) => correlationEntrySchema.parse(entry) as CorrelationEntry);
+  demo = await fittedDemoEntries('page-html');
+  entries = demo.entries;
 }, 120_000);
 afterAll(async () => {
-  forgetStoredFits();
-  if (root) await rm(root, { recursive: true, force: true });
+  await demo?.remove();
 });
 
 describe('htmlText', () => {

@@ -5,39 +5,27 @@
  * Checked on every correlation of the demo handbook: what the page reads back is exactly what the components compute
  * from the full record in this thread (the path `astro dev` and tests take), NaN, ±Infinity and −0 included.
  */
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataTableView } from '../../src/components/lib/dataRows.ts';
 import { fitOf, pointsOf, previewsOf, selectionOf } from '../../src/components/lib/entryView.ts';
 import { PAGE_PARTS_FILE, pageParts, type PageParts } from '../../src/components/lib/pageParts.ts';
 import { previewView } from '../../src/components/lib/previewView.ts';
-import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
-import { forgetStoredFits } from '../../src/load/storedFit.ts';
 import { toCacheJson } from '../../src/load/fitCache.ts';
 import { fromPackedJson } from '../../src/load/packedJson.ts';
 import { correlationFolderFiles } from '../../src/loaders/correlationFolder.ts';
 import { identityOf } from '../../src/components/lib/identityOf.ts';
 import { handbookSettingsSchema } from '../../src/schema/index.ts';
-import { storedEntry } from '../../src/loaders/storedEntry.ts';
-import { correlationEntrySchema, type CorrelationEntry } from '../../src/schema/index.ts';
+import type { CorrelationEntry } from '../../src/schema/index.ts';
+import { fittedDemoEntries } from '../helpers/demoEntries.ts';
 
-let root = '';
 let entries: CorrelationEntry[] = [];
+let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
 beforeAll(async () => {
-  root = await mkdtemp(path.join(tmpdir(), 'correlary-page-parts-'));
-  const fitCache = { directory: path.join(root, 'fits'), version: 'test-1' };
-  const handbook = await fitHandbook('content', { fitCache });
-  const histories = await handbookHistory('content', handbook.datasets);
-  entries = handbook.datasets
-    .map((item) => storedEntry(item, fitCache.directory, histories))
-    .filter((entry): entry is CorrelationEntry => entry !== undefined && entry.fit !== null)
-    .map((entry) => correlationEntrySchema.parse(entry) as CorrelationEntry);
+  demo = await fittedDemoEntries('page-parts');
+  entries = demo.entries;
 }, 120_000);
 afterAll(async () => {
-  forgetStoredFits();
-  if (root) await rm(root, { recursive: true, force: true });
+  await demo?.remove();
 });
 
 describe('page parts', () => {
