@@ -66,7 +66,7 @@ async function filesPool(jobs: number, options: WriteFilesOptions): Promise<Work
   // One worker fewer than fitting uses (at least one): the files are written while Astro's own thread bundles the
   // code and renders the pages, the work every page waits for, and on a 2-core machine a second files worker took
   // CPU from it (N = 1000 cold build, two runs each, alternating: 22.6 and 22.1 s with two, 20.7 and 20.9 s with one;
-  // Rollup 5.1–5.4 s against 3.7–3.9 s). The worker also runs at a lower priority than Astro's thread (filesWorker.ts).
+  // Rollup 5.1–5.4 s against 3.7–3.9 s).
   const fitting = poolSize(jobs, workers.minimumJobs);
   const size = Math.max(Math.min(1, fitting), fitting - 1);
   if (size < 1) return undefined;

@@ -7,7 +7,6 @@ import { parentPort } from 'node:worker_threads';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
 import { forgetStoredFits } from '../load/storedFit.ts';
-import { lowerThreadPriority } from '../load/threadPriority.ts';
 import { writeCorrelationFolder } from './correlationFolder.ts';
 
 interface Job {
@@ -17,9 +16,6 @@ interface Job {
   readonly handbook: HandbookIdentity;
   readonly digest: string;
 }
-
-// Below Astro's own thread, which bundles and renders meanwhile: this worker takes the CPU it leaves.
-lowerThreadPriority(10);
 
 parentPort?.on('message', (job: Job) => {
   writeCorrelationFolder(job.target, job.entry, job.handbook, job.digest)
