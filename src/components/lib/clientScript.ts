@@ -1,6 +1,6 @@
 /**
  * Where a page finds its browser scripts. Each component that runs a script in the browser names one entry of
- * src/client/entries/ and puts `<script is:inline type="module" src={await clientScriptSrc(…)}>` where it is used.
+ * src/client/entries/ and puts `<PageScript entry="…" />` (src/components/PageScript.astro) where it is used.
  * - In a build, the entries are bundled by esbuild when the build starts (src/loaders/clientScriptsIntegration.ts,
  *   in esbuild's own process, while Astro starts up and fits), so that Astro has no client build to make: that was
  *   0.6–0.8 s of every build on Astro's thread, whatever the size of the handbook. The files go into the output's
