@@ -23,9 +23,10 @@ export async function bundleClientScripts(root: string, folder: string): Promise
   const { build } = createRequire(import.meta.url)('esbuild') as typeof import('esbuild');
   rmSync(folder, { recursive: true, force: true });
   mkdirSync(folder, { recursive: true });
+  const sources = new Map(CLIENT_ENTRIES.map((entry) => [path.join(root, 'src', 'client', 'entries', `${entry}.ts`), entry]));
   const result = await build({
     absWorkingDir: root,
-    entryPoints: Object.fromEntries(CLIENT_ENTRIES.map((entry) => [entry, path.join(root, 'src', 'client', 'entries', `${entry}.ts`)])),
+    entryPoints: Object.fromEntries([...sources].map(([source, entry]) => [entry, source])),
     outdir: folder,
     entryNames: '[name].[hash]',
     chunkNames: '[name].[hash]',
@@ -47,7 +48,7 @@ export async function bundleClientScripts(root: string, folder: string): Promise
   for (const [output, info] of Object.entries(result.metafile.outputs)) {
     const name = path.basename(output);
     files.push(name);
-    const entry = CLIENT_ENTRIES.find((candidate) => info.entryPoint !== undefined && path.resolve(root, info.entryPoint) === path.join(root, 'src', 'client', 'entries', `${candidate}.ts`));
+    const entry = info.entryPoint === undefined ? undefined : sources.get(path.resolve(root, info.entryPoint));
     if (entry !== undefined) entries[entry] = name;
   }
   const missing = CLIENT_ENTRIES.filter((entry) => entries[entry] === undefined);

@@ -42,9 +42,10 @@ const RESAVE_WAIT_MS = 10_000;
  */
 export async function completeStoreFile(file: string, text: string, waitMs = RESAVE_WAIT_MS): Promise<string> {
   const stored = storedCorrelations();
-  if (stored === undefined || missingDigests(text, stored.digests) === 0) return text;
+  const lacking = stored === undefined ? 0 : missingDigests(text, stored.digests);
+  if (stored === undefined || lacking === 0) return text;
   // Said, so that a build log shows it happened (Astro's own log is quiet about it).
-  console.warn(`correlary: the content store Astro saved lacks ${missingDigests(text, stored.digests)} of the ${stored.digests.length} correlations read in this build; saving it again`);
+  console.warn(`correlary: the content store Astro saved lacks ${lacking} of the ${stored.digests.length} correlations read in this build; saving it again`);
   stored.resave();
   let latest = text;
   for (let waited = 0; waited < waitMs; waited += 100) {
