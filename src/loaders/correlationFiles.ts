@@ -12,7 +12,6 @@
  * file linked into an earlier build's output keeps its bytes.
  */
 import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
 import { mkdir, readFile, readdir, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { toCacheJson } from '../load/fitCache.ts';
@@ -21,7 +20,8 @@ import { poolSize } from '../load/fitPool.ts';
 import { forgetStoredFits } from '../load/storedFit.ts';
 import { workerBundle } from '../load/workerBundle.ts';
 import { createWorkerPool, type WorkerPool } from '../load/workerPool.ts';
-import { DIGEST_FILE, writeCorrelationFolder } from './correlationFolder.ts';
+import { writeCorrelationFolder } from './correlationFolder.ts';
+import { PARTS_FILE, partsDigest } from './folderParts.ts';
 import { linkOrCopy, type LinkFile } from './linkOrCopy.ts';
 import type { HandbookIdentity } from '../export/index.ts';
 import type { CorrelationEntry } from '../schema/index.ts';
@@ -80,11 +80,7 @@ async function filesPool(jobs: number, options: WriteFilesOptions): Promise<Work
 
 /** The digest a folder was last written from, or undefined when it has none (never written, or being rewritten). */
 function previousDigest(target: string): string | undefined {
-  try {
-    return readFileSync(path.join(target, DIGEST_FILE), 'utf8');
-  } catch {
-    return undefined;
-  }
+  return partsDigest(path.join(target, PARTS_FILE));
 }
 
 /** Run `work` on every item, at most `limit` at a time. */
@@ -175,7 +171,7 @@ export async function copyCorrelationFiles(folder: string, outDir: string, link?
     const source = path.join(folder, slug);
     const target = path.join(outDir, 'correlations', slug);
     await mkdir(target, { recursive: true });
-    // Not the digest nor the page parts: names starting with a dot are the cache's own (correlationFolder.ts).
+    // Not the parts file: names starting with a dot are the cache's own (correlationFolder.ts).
     const names = (await readdir(source)).filter((name) => !name.startsWith('.'));
     // Once a link could not be made, the rest go to the same file system: copy them without trying.
     const copy = copied > 0;

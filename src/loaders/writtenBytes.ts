@@ -1,13 +1,13 @@
 /**
- * The bytes of a file the content loader wrote in this build into a correlation's folder (see writtenDownload.ts,
- * which reads the page parts as JSON), or undefined when it is not there. Only a build may ask: `astro dev`
+ * The bytes of a part the content loader wrote in this build into a correlation's folder (its parts file,
+ * folderParts.ts; see writtenDownload.ts, which reads the page parts as JSON), or undefined when it is not there. Only a build may ask: `astro dev`
  * writes no files, so a folder left by an earlier build could be stale.
  */
-import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { StoredFitReference } from '../load/storedFit.ts';
 import { correlationFilesFolder } from './correlationFilesFolder.ts';
+import { PARTS_FILE, readPart } from './folderParts.ts';
 
 const folders = new Map<string, string>();
 
@@ -22,9 +22,5 @@ export function writtenBytes(reference: StoredFitReference, slug: string, file: 
     folder = correlationFilesFolder(pathToFileURL(`${path.dirname(path.resolve(directory))}${path.sep}`));
     folders.set(directory, folder);
   }
-  try {
-    return readFileSync(path.join(folder, slug, file));
-  } catch {
-    return undefined;
-  }
+  return readPart(path.join(folder, slug, PARTS_FILE), file);
 }

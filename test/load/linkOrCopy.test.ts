@@ -9,6 +9,7 @@ import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { linkOrCopy } from '../../src/loaders/linkOrCopy.ts';
 import { copyCorrelationFiles } from '../../src/loaders/correlationFiles.ts';
+import { PARTS_FILE, partsFileBytes } from '../../src/loaders/folderParts.ts';
 
 const made: string[] = [];
 function folder(prefix: string, base = tmpdir()): string {
@@ -20,13 +21,13 @@ afterEach(() => {
   for (const dir of made.splice(0)) rmSync(dir, { recursive: true, force: true });
 });
 
-/** A cache folder as writeCorrelationFiles leaves it: <slug>/ files, a digest file, the manifest. */
+/** A cache folder as writeCorrelationFiles leaves it: <slug>/ files, a parts file, the manifest. */
 function cacheWith(files: Record<string, Record<string, string>>): string {
   const cache = folder('correlary-link-cache-');
   for (const [slug, byName] of Object.entries(files)) {
     mkdirSync(path.join(cache, slug));
     for (const [name, text] of Object.entries(byName)) writeFileSync(path.join(cache, slug, name), text);
-    writeFileSync(path.join(cache, slug, '.digest'), 'digest');
+    writeFileSync(path.join(cache, slug, PARTS_FILE), partsFileBytes('digest', [{ file: '.page.json', text: '{}' }]));
   }
   writeFileSync(path.join(cache, 'manifest.json'), JSON.stringify({ slugs: Object.keys(files).sort() }));
   return cache;
@@ -93,12 +94,12 @@ describe('linkOrCopy()', () => {
 describe('copyCorrelationFiles()', () => {
   const files = { a: { 'coefficients.json': '{"a":1}\n', 'plot.svg': '<svg>a</svg>' }, b: { 'data.csv': 'x\n1\n' } };
 
-  it('links every file but the digest into correlations/<slug>/', async () => {
+  it('links every file but the parts file into correlations/<slug>/', async () => {
     const cache = cacheWith(files);
     const out = folder('correlary-link-out-');
     expect(await copyCorrelationFiles(cache, out)).toEqual({ files: 3, copied: 0 });
     expect(statSync(path.join(out, 'correlations', 'a', 'plot.svg')).ino).toBe(statSync(path.join(cache, 'a', 'plot.svg')).ino);
-    expect(() => statSync(path.join(out, 'correlations', 'a', '.digest'))).toThrow();
+    expect(() => statSync(path.join(out, 'correlations', 'a', PARTS_FILE))).toThrow();
   });
 
   it('copies every file when linking fails, with the same bytes', async () => {
