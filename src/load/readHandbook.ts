@@ -6,10 +6,14 @@ import { readdir, stat } from 'node:fs/promises';
 import path from 'node:path';
 import { SLUG_PATTERN } from '../schema/index.ts';
 import { error, type Diagnostic } from './diagnostic.ts';
+import { mapLimited } from './mapLimited.ts';
 import type { FolderRecord } from './folderRecord.ts';
 import { readFolder, type FolderRead } from './readDataset.ts';
 import { readHandbookSettings, type HandbookSettingsResult } from './readHandbookSettings.ts';
 import type { DatasetResult } from './types.ts';
+
+/** How many folders are read at once: enough to keep Node's four I/O threads busy. */
+const FOLDERS_IN_FLIGHT = 16;
 
 export interface HandbookResult {
   /** One result per folder, sorted by folder name. */
@@ -50,14 +54,16 @@ export async function readHandbook(directory: string, options: ReadHandbookOptio
     .map((entry) => entry.name)
     .sort();
   options.onFolders?.(folders.length);
-  const datasets = await Promise.all(
-    folders.map(async (name) => {
-      const folder = path.join(directory, name);
-      const read = await readFolder(folder, options.known?.(folder));
-      options.onDataset?.(read.result, folders.length, read);
-      return read.result;
-    }),
-  );
+  // A few folders at a time, in order, so that they are read one after another from the start and each is handed
+  // to fitting as soon as it is read (onDataset). Started all at once, every folder's reads queued behind every
+  // other's, and the first was read only when nearly all were: N = 5000 cold build, the fitting workers idle for
+  // the 4 s of reading.
+  const datasets = await mapLimited(folders, FOLDERS_IN_FLIGHT, async (name) => {
+    const folder = path.join(directory, name);
+    const read = await readFolder(folder, options.known?.(folder));
+    options.onDataset?.(read.result, folders.length, read);
+    return read.result;
+  });
   const settings = await readHandbookSettings(directory);
   const diagnostics: Diagnostic[] = [...settings.diagnostics];
 

@@ -18,6 +18,7 @@ import { toCacheJson } from '../load/fitCache.ts';
 import { sourcesVersion } from '../load/fitCodeVersion.ts';
 import { poolSize } from '../load/fitPool.ts';
 import { forgetStoredFits } from '../load/storedFit.ts';
+import { mapLimited } from '../load/mapLimited.ts';
 import { workerBundle } from '../load/workerBundle.ts';
 import { createWorkerPool, type WorkerPool } from '../load/workerPool.ts';
 import { writeCorrelationFolder } from './correlationFolder.ts';
@@ -83,15 +84,6 @@ function previousDigest(target: string): string | undefined {
   return partsDigest(path.join(target, PARTS_FILE));
 }
 
-/** Run `work` on every item, at most `limit` at a time. */
-async function eachLimited<T>(items: readonly T[], limit: number, work: (item: T) => Promise<unknown>): Promise<void> {
-  let next = 0;
-  const lane = async () => {
-    while (next < items.length) await work(items[next++]!);
-  };
-  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, lane));
-}
-
 /**
  * Write the files of every fitted entry into `folder`/<slug>/ (unless unchanged) and the list of slugs.
  * @param version the files code version (filesCodeVersion), part of each folder's digest
@@ -124,7 +116,7 @@ export async function writeCorrelationFiles(
   let byWorkers = 0;
   try {
     // In this thread a few at a time: the file writes of one overlap the next one's computing.
-    await eachLimited(jobs, pool === undefined ? 4 : jobs.length, async (job) => {
+    await mapLimited(jobs, pool === undefined ? 4 : jobs.length, async (job) => {
       if (pool !== undefined) {
         try {
           await pool.run(job);
