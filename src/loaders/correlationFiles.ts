@@ -4,7 +4,7 @@
  * sub-folder per correlation, and copied into the output when the build is done (copyCorrelationFiles, from the
  * integration in src/loaders/correlationFilesIntegration.ts). Thousands of small files are thus written once each,
  * not rendered as thousands of Astro routes. A correlation whose stored entry and code are unchanged keeps its
- * folder from the last build (a digest file says what it was written from); folders of correlations no longer
+ * folder from the last build (its parts file holds the digest it was written from); folders of correlations no longer
  * in the handbook are deleted. Same input, same bytes: nothing here depends on time or machine.
  *
  * The output gets hard links to the cache's files where the file system allows (copies otherwise), so a file of

@@ -1,7 +1,7 @@
 /**
  * The bytes of a part the content loader wrote in this build into a correlation's folder (its parts file,
- * folderParts.ts; see writtenDownload.ts, which reads the page parts as JSON), or undefined when it is not there. Only a build may ask: `astro dev`
- * writes no files, so a folder left by an earlier build could be stale.
+ * folderParts.ts; see writtenDownload.ts, which reads the page parts as JSON), or undefined when it is not there.
+ * Only a build may ask: `astro dev` writes no files, so a folder left by an earlier build could be stale.
  */
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
