@@ -6,7 +6,7 @@
  * holding line ends, quotes, separators and non-ASCII text, and empty and nested arrays and objects.
  */
 import fc from 'fast-check';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { correlationDownloads } from '../../src/components/lib/correlationDownloads.ts';
 import { correlationFiles } from '../../src/components/lib/correlationFiles.ts';
 import { entryRecord } from '../../src/components/lib/entryRecord.ts';
@@ -16,33 +16,25 @@ import { handbookJsonBytes } from '../../src/components/lib/handbookJsonBytes.ts
 import { identityOf } from '../../src/components/lib/identityOf.ts';
 import { handbookJson, type HandbookIdentity } from '../../src/export/index.ts';
 import type { CorrelationEntry } from '../../src/schema/index.ts';
-import { fittedDemoEntries } from '../helpers/demoEntries.ts';
+import { demoEntriesForSuite } from '../helpers/demoEntries.ts';
 
 const settings = { title: 'Test "handbook" <x>', organisation: 'Org ≤ & co', notice: 'Line one\nline two', url: 'https://handbook.example.org' };
 const base = '/hb/';
 const top = (correlations: Parameters<typeof handbookJson>[0]['correlations']) =>
   handbookJson({ generator: { name: 'correlary', version: '0.0.0' }, handbook: { title: settings.title, organisation: settings.organisation, url: 'https://handbook.example.org/hb/', basePath: base, notice: settings.notice }, correlations });
 
-let entries: CorrelationEntry[] = [];
-let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
-beforeAll(async () => {
-  demo = await fittedDemoEntries('handbook-json');
-  entries = demo.entries;
-}, 120_000);
-afterAll(async () => {
-  await demo?.remove();
-});
+const entries = demoEntriesForSuite('handbook-json');
 
 describe('handbookJsonBytes', () => {
   it('joins the demo handbook from the files a files worker writes into the bytes of JSON.stringify over the whole export', () => {
-    expect(entries.length).toBeGreaterThan(10);
+    expect(entries().length).toBeGreaterThan(10);
     const identity = (entry: CorrelationEntry): HandbookIdentity => identityOf(entry.slug, settings as never, base, undefined);
     const expected = `${JSON.stringify(
-      top(entries.map((entry) => ({ record: entryRecord(entry, identity(entry)), url: `${base}correlations/${entry.slug}/`, downloads: correlationDownloads(entry, base) }))),
+      top(entries().map((entry) => ({ record: entryRecord(entry, identity(entry)), url: `${base}correlations/${entry.slug}/`, downloads: correlationDownloads(entry, base) }))),
       null,
       2,
     )}\n`;
-    const pieces = entries.map((entry) => {
+    const pieces = entries().map((entry) => {
       const coefficients = correlationFiles(entry, identity(entry)).find((file) => file.file === 'coefficients.json')!.text;
       const written = Buffer.from(handbookEntryFile(coefficients, identity(entry)));
       const line = written.indexOf(10);

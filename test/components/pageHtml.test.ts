@@ -9,7 +9,7 @@
 import fc from 'fast-check';
 import { escapeHTML } from 'astro/runtime/server/escape.js';
 import { parseFragment, type DefaultTreeAdapterMap } from 'parse5';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { checkValueRowsHtml } from '../../src/components/lib/checkValueRowsHtml.ts';
 import { dataTableView } from '../../src/components/lib/dataRows.ts';
 import { fitOf, selectionOf } from '../../src/components/lib/entryView.ts';
@@ -18,8 +18,7 @@ import { htmlText } from '../../src/components/lib/htmlText.ts';
 import { pageHtml, pageHtmlText, readPageHtml } from '../../src/components/lib/pageHtml.ts';
 import { statisticsRowsHtml } from '../../src/components/lib/statisticsRowsHtml.ts';
 import { dataRowsHtml } from '../../src/components/lib/dataRowsHtml.ts';
-import type { CorrelationEntry } from '../../src/schema/index.ts';
-import { fittedDemoEntries } from '../helpers/demoEntries.ts';
+import { demoEntriesForSuite } from '../helpers/demoEntries.ts';
 
 type Node = DefaultTreeAdapterMap['node'];
 type Element = DefaultTreeAdapterMap['element'];
@@ -42,15 +41,7 @@ function rowsOf(html: string): { rows: { className: string | undefined; cells: s
   return { rows, tags };
 }
 
-let entries: CorrelationEntry[] = [];
-let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
-beforeAll(async () => {
-  demo = await fittedDemoEntries('page-html');
-  entries = demo.entries;
-}, 120_000);
-afterAll(async () => {
-  await demo?.remove();
-});
+const entries = demoEntriesForSuite('page-html');
 
 describe('htmlText', () => {
   it('htmlText(text) is Astro escapeHTML(text), as Astro escapes an expression, on random text', () => {
@@ -63,8 +54,8 @@ describe('htmlText', () => {
 
 describe('pageHtml', () => {
   it('every demo correlation: each table body parses to its rows, with the texts the components print', () => {
-    expect(entries.length).toBeGreaterThan(10);
-    for (const entry of entries) {
+    expect(entries().length).toBeGreaterThan(10);
+    for (const entry of entries()) {
       const fit = fitOf(entry)!;
       const html = pageHtml(entry);
       const view = dataTableView(entry, fit);
@@ -101,7 +92,7 @@ describe('pageHtml', () => {
   });
 
   it('hostile notes and units stay text: no element beyond the table rows, and the text comes back whole', () => {
-    const entry = entries.find((item) => dataTableView(item, fitOf(item)!).hasNote)!;
+    const entry = entries().find((item) => dataTableView(item, fitOf(item)!).hasNote)!;
     const fit = fitOf(entry)!;
     const view = dataTableView(entry, fit);
     for (const payload of PAYLOADS) {
@@ -116,7 +107,7 @@ describe('pageHtml', () => {
   });
 
   it('readPageHtml(pageHtmlText(html)) gives the pieces back, on the demo and on random text; anything else is refused', () => {
-    for (const entry of entries) {
+    for (const entry of entries()) {
       const html = pageHtml(entry);
       expect(readPageHtml(pageHtmlText(html)), entry.slug).toEqual(html);
     }
@@ -130,7 +121,7 @@ describe('pageHtml', () => {
       }),
       { numRuns: 300 },
     );
-    const text = pageHtmlText(pageHtml(entries[0]!));
+    const text = pageHtmlText(pageHtml(entries()[0]!));
     expect(readPageHtml(text.slice(0, -1))).toBeUndefined();
     expect(readPageHtml(`${text}x`)).toBeUndefined();
     expect(readPageHtml('not a header')).toBeUndefined();

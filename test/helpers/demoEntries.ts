@@ -6,6 +6,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { fitHandbook, handbookHistory } from '../../src/load/index.ts';
 import { forgetStoredFits } from '../../src/load/storedFit.ts';
 import { storedEntry } from '../../src/loaders/storedEntry.ts';
@@ -28,4 +29,20 @@ export async function fittedDemoEntries(name: string): Promise<{ entries: Correl
       await rm(root, { recursive: true, force: true });
     },
   };
+}
+
+/**
+ * fittedDemoEntries for one test file: fitted before its tests (beforeAll) and removed after them (afterAll).
+ * @returns the entries, once fitted (empty before)
+ * @example const entries = demoEntriesForSuite('page-parts'); it('…', () => expect(entries().length).toBeGreaterThan(10));
+ */
+export function demoEntriesForSuite(name: string): () => CorrelationEntry[] {
+  let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
+  beforeAll(async () => {
+    demo = await fittedDemoEntries(name);
+  }, 120_000);
+  afterAll(async () => {
+    await demo?.remove();
+  });
+  return () => demo?.entries ?? [];
 }

@@ -5,7 +5,7 @@
  * Checked on every correlation of the demo handbook: what the page reads back is exactly what the components compute
  * from the full record in this thread (the path `astro dev` and tests take), NaN, ±Infinity and −0 included.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { dataTableView } from '../../src/components/lib/dataRows.ts';
 import { fitOf, pointsOf, previewsOf, selectionOf } from '../../src/components/lib/entryView.ts';
 import { PAGE_PARTS_FILE, pageParts, type PageParts } from '../../src/components/lib/pageParts.ts';
@@ -15,24 +15,15 @@ import { fromPackedJson } from '../../src/load/packedJson.ts';
 import { correlationFolderFiles } from '../../src/loaders/correlationFolder.ts';
 import { identityOf } from '../../src/components/lib/identityOf.ts';
 import { handbookSettingsSchema } from '../../src/schema/index.ts';
-import type { CorrelationEntry } from '../../src/schema/index.ts';
-import { fittedDemoEntries } from '../helpers/demoEntries.ts';
+import { demoEntriesForSuite } from '../helpers/demoEntries.ts';
 
-let entries: CorrelationEntry[] = [];
-let demo: Awaited<ReturnType<typeof fittedDemoEntries>> | undefined;
-beforeAll(async () => {
-  demo = await fittedDemoEntries('page-parts');
-  entries = demo.entries;
-}, 120_000);
-afterAll(async () => {
-  await demo?.remove();
-});
+const entries = demoEntriesForSuite('page-parts');
 
 describe('page parts', () => {
   it('what a page reads back from its parts equals what the components compute from the full record', () => {
-    expect(entries.length).toBeGreaterThan(10);
+    expect(entries().length).toBeGreaterThan(10);
     const settings = handbookSettingsSchema.parse({});
-    for (const entry of entries) {
+    for (const entry of entries()) {
       // The text the folder writer writes, read back as the page reads it.
       const text = correlationFolderFiles(entry, identityOf(entry.slug, settings, settings.basePath, settings.url)).find((file) => file.file === PAGE_PARTS_FILE)!.text;
       const read = fromPackedJson(text) as PageParts;
@@ -49,11 +40,11 @@ describe('page parts', () => {
   });
 
   it('the demo exercises what the parts must carry: shortened tables, flagged rows, notes, uncertainties and previews', () => {
-    const tables = entries.map((entry) => pageParts(entry, {}).dataTable);
+    const tables = entries().map((entry) => pageParts(entry, {}).dataTable);
     expect(tables.some((table) => table.rows.length < table.used)).toBe(true);
     expect(tables.some((table) => table.flagged > 0)).toBe(true);
     expect(tables.some((table) => table.hasNote)).toBe(true);
     expect(tables.some((table) => table.hasUncertainty)).toBe(true);
-    expect(entries.some((entry) => pageParts(entry, {}).previews !== null)).toBe(true);
+    expect(entries().some((entry) => pageParts(entry, {}).previews !== null)).toBe(true);
   });
 });
